@@ -1,0 +1,11 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  // These run only on the server and load native or worker-thread code that the bundler must not touch.
+  serverExternalPackages: ["pdf-parse", "pg", "pg-boss", "natural", "pdfkit", "nodemailer", "bcryptjs"],
+  poweredByHeader: false,
+  experimental: {
+    // Uploads go through route handlers, which read the body themselves and enforce their own limit.
+    serverActions: { bodySizeLimit: "1mb" },
+  },
+};
+export default nextConfig;
