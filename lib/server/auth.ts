@@ -1,0 +1,121 @@
+/**
+ * Sign-in: e-mail magic links (through the local mail fake) and passwords for invited users.
+ * Sessions are JWTs in httpOnly, sameSite=lax cookies (next-auth's defaults); the role is NOT taken
+ * from the token but read from the database on every request (lib/server/session.ts), so a role
+ * change or a deactivation takes effect at once. There is no middleware: every page and handler
+ * checks for itself.
+ */
+import NextAuth, { CredentialsSignin } from "next-auth";
+import Credentials from "next-auth/providers/credentials";
+import Nodemailer from "next-auth/providers/nodemailer";
+import { KyselyAdapter } from "@auth/kysely-adapter";
+import type { Adapter } from "next-auth/adapters";
+import { createHash } from "node:crypto";
+import { sql } from "kysely";
+import { getDb } from "@/db";
+import { verifyPassword, DUMMY_HASH } from "./passwords";
+import { checkRateLimit, recordAttempt } from "./rate-limit";
+import { mailTransport, MAIL_FROM, appUrl } from "./mail";
+import { signInEmail } from "./mail-templates";
+
+class RateLimited extends CredentialsSignin {
+  code = "rate_limited";
+}
+
+export function hashLinkToken(token: string): string {
+  // next-auth stores sha256(token + secret) in VerificationToken.
+  return createHash("sha256").update(`${token}${process.env.AUTH_SECRET}`).digest("hex");
+}
+
+function adapter(): Adapter {
+  const db = getDb();
+  // The adapter's types are for its own four tables; ours has more, which it never touches.
+  const base = KyselyAdapter(db as never) as Adapter;
+  return {
+    ...base,
+    async useVerificationToken(params) {
+      const used = await base.useVerificationToken!(params);
+      if (used) {
+        await db
+          .insertInto("used_sign_in_links")
+          .values({ token_hash: params.token, identifier: params.identifier })
+          .onConflict((oc) => oc.doNothing())
+          .execute();
+      }
+      return used;
+    },
+  };
+}
+
+export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
+  adapter: adapter(),
+  session: { strategy: "jwt", maxAge: 8 * 60 * 60 },
+  trustHost: true,
+  pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in/problem" },
+  providers: [
+    Nodemailer({
+      server: {
+        host: process.env.SMTP_HOST ?? "127.0.0.1",
+        port: Number(process.env.SMTP_PORT ?? 2525),
+        auth: { user: "echoline", pass: "local" },
+      },
+      from: MAIL_FROM,
+      maxAge: 24 * 60 * 60,
+      async sendVerificationRequest({ identifier, url }) {
+        // Same answer for unknown or deactivated addresses; only invited, active people get a link.
+        const user = await getDb()
+          .selectFrom("User")
+          .select(["id"])
+          .where(sql`lower(email)`, "=", identifier.toLowerCase())
+          .where("deactivated_at", "is", null)
+          .executeTakeFirst();
+        if (!user) return;
+        // The mail links to our own page, which tells an expired or used link from a good one
+        // before handing over to next-auth's callback.
+        const u = new URL(url);
+        const link = `${appUrl()}/sign-in/link?${u.searchParams.toString()}`;
+        await mailTransport().sendMail({ from: MAIL_FROM, to: identifier, ...signInEmail(link) });
+      },
+    }),
+    Credentials({
+      credentials: { email: {}, password: {} },
+      async authorize(credentials, request) {
+        const email = String(credentials?.email ?? "").trim().toLowerCase();
+        const password = String(credentials?.password ?? "");
+        const ip = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? "local";
+        if (!email || !password || password.length > 200) return null;
+        if (!(await checkRateLimit(email, ip))) throw new RateLimited();
+        const user = await getDb()
+          .selectFrom("User")
+          .select(["id", "email", "name", "password_hash", "deactivated_at"])
+          .where(sql`lower(email)`, "=", email)
+          .executeTakeFirst();
+        // Compare against a dummy hash for unknown e-mails so both take the same time.
+        const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);
+        const good = !!user && !!user.password_hash && ok && !user.deactivated_at;
+        await recordAttempt(email, ip, good);
+        if (!good) return null;
+        return { id: user.id, email: user.email, name: user.name };
+      },
+    }),
+  ],
+  callbacks: {
+    async signIn({ user }) {
+      if (!user?.email) return false;
+      const row = await getDb()
+        .selectFrom("User")
+        .select(["deactivated_at"])
+        .where(sql`lower(email)`, "=", user.email.toLowerCase())
+        .executeTakeFirst();
+      return !!row && !row.deactivated_at;
+    },
+    async jwt({ token, user }) {
+      if (user?.id) token.sub = user.id;
+      // Keep the token small: only who, never what they may do.
+      return { sub: token.sub, email: token.email, name: token.name, iat: token.iat, exp: token.exp, jti: token.jti };
+    },
+    async session({ session, token }) {
+      return { expires: session.expires, user: { id: token.sub ?? "", email: session.user?.email ?? "", name: session.user?.name ?? null } } as typeof session;
+    },
+  },
+}));

@@ -1,0 +1,108 @@
+/**
+ * The one helper every route handler goes through: authenticate, check the permission, parse the
+ * body and query with zod (keeping the schema's types), and turn every failure into the one error
+ * shape. Nothing from a stack trace reaches the browser.
+ */
+import { NextResponse, type NextRequest } from "next/server";
+import { z } from "zod";
+import { getActor } from "./session";
+import { can, type Actor, type Permission } from "@/lib/auth/permissions";
+import { HttpError, errorBody, isDatabaseDown, unauthenticated, forbidden } from "./errors";
+
+export const DEFAULT_BODY_LIMIT = 256 * 1024;
+
+type Ctx<B, Q> = {
+  actor: Actor;
+  body: B;
+  query: Q;
+  params: Record<string, string>;
+  req: NextRequest;
+};
+
+type Options<B extends z.ZodType | undefined, Q extends z.ZodType | undefined> = {
+  permission: Permission;
+  body?: B;
+  query?: Q;
+  maxBytes?: number;
+};
+
+type Infer<S> = S extends z.ZodType ? z.infer<S> : undefined;
+
+export function route<B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined>(
+  opts: Options<B, Q>,
+  fn: (ctx: Ctx<Infer<B>, Infer<Q>>) => Promise<Response | unknown>,
+) {
+  return async (req: NextRequest, context: { params: Promise<Record<string, string>> }) => {
+    try {
+      const actor = await getActor();
+      if (!actor) throw unauthenticated();
+      if (!can(actor, opts.permission)) throw forbidden();
+      const params = (await context?.params) ?? {};
+      const query = opts.query ? parse(opts.query, Object.fromEntries(req.nextUrl.searchParams)) : undefined;
+      const body = opts.body ? parse(opts.body, await readJson(req, opts.maxBytes ?? DEFAULT_BODY_LIMIT)) : undefined;
+      const out = await fn({ actor, body: body as Infer<B>, query: query as Infer<Q>, params, req });
+      if (out instanceof Response) return out;
+      return NextResponse.json(out ?? { ok: true });
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}
+
+export function errorResponse(err: unknown): Response {
+  if (err instanceof HttpError) {
+    return NextResponse.json(errorBody(err.code, err.message, err.field), { status: err.status });
+  }
+  // next/navigation's redirect/forbidden throw control-flow errors that Next must see.
+  if (err && typeof err === "object" && "digest" in err && String((err as { digest: unknown }).digest).startsWith("NEXT_")) throw err;
+  if (isDatabaseDown(err)) {
+    return NextResponse.json(errorBody("database_unavailable", "The database is not reachable right now. Try again in a minute."), { status: 503 });
+  }
+  console.error("[route] unexpected error:", err);
+  return NextResponse.json(errorBody("internal", "Something went wrong on our side. The error was logged."), { status: 500 });
+}
+
+function parse<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
+  const r = schema.safeParse(input);
+  if (r.success) return r.data;
+  const issue = r.error.issues[0];
+  const field = issue?.path.join(".") || undefined;
+  throw new HttpError(400, "invalid", field ? `${field}: ${issue.message}` : issue?.message ?? "Invalid input.", field);
+}
+
+/** Reads a JSON body with a byte limit that holds even when Content-Length lies or is absent. */
+export async function readJson(req: Request, maxBytes: number): Promise<unknown> {
+  const declared = Number(req.headers.get("content-length") ?? "0");
+  if (declared > maxBytes) throw new HttpError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`, "body");
+  const buf = await readLimited(req, maxBytes);
+  if (buf.length === 0) throw new HttpError(400, "invalid", "The request needs a JSON body.", "body");
+  try {
+    return JSON.parse(new TextDecoder().decode(buf));
+  } catch {
+    throw new HttpError(400, "invalid", "The request body is not valid JSON.", "body");
+  }
+}
+
+export async function readLimited(req: Request, maxBytes: number): Promise<Uint8Array> {
+  if (!req.body) return new Uint8Array();
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.length;
+    if (total > maxBytes) {
+      await reader.cancel();
+      throw new HttpError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`, "body");
+    }
+    chunks.push(value);
+  }
+  const out = new Uint8Array(total);
+  let off = 0;
+  for (const c of chunks) {
+    out.set(c, off);
+    off += c.length;
+  }
+  return out;
+}

@@ -1,0 +1,13 @@
+import type { Migration } from "kysely";
+import * as accounts from "./20261201T0001_accounts";
+import * as corpus from "./20261201T0002_corpus";
+import * as graph from "./20261201T0003_graph";
+import * as people from "./20261201T0004_people";
+
+// Listed explicitly (no glob): the order here is the order they run. Append, never edit.
+export const migrations: Record<string, Migration> = {
+  "20261201T0001_accounts": accounts,
+  "20261201T0002_corpus": corpus,
+  "20261201T0003_graph": graph,
+  "20261201T0004_people": people,
+};
