@@ -1,0 +1,3 @@
+export * from "./types";
+export * from "./match";
+export * from "./seed";
