@@ -1,0 +1,2 @@
+export * from "./types";
+export { buildTrail, buildAllTrails, DEFAULT_MAX_DEPTH } from "./build";
