@@ -1,0 +1,14 @@
+import type { Kysely, Transaction } from "kysely";
+import type { Database } from "@/db";
+import type { ArticleStatus } from "@/db/schema/corpus";
+import { MINING_QUEUE } from "./queue";
+
+/** Every status change of an article is also a row of job_events: the article's history. */
+export async function recordEvent(
+  db: Kysely<Database> | Transaction<Database>,
+  articleId: string,
+  state: ArticleStatus | "retry",
+  message: string | null,
+): Promise<void> {
+  await db.insertInto("job_events").values({ article_id: articleId, job_name: MINING_QUEUE, state, message }).execute();
+}

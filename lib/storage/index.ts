@@ -1,0 +1,74 @@
+/**
+ * Where uploaded files live. Files are addressed by their SHA-256, so the same bytes are stored once
+ * and a write can be repeated safely. The default keeps them in a folder of the project's data
+ * directory; another backend (object storage) only has to implement this interface.
+ */
+import fs from "node:fs/promises";
+import path from "node:path";
+import { randomBytes } from "node:crypto";
+
+export interface FileStorage {
+  /** Stores the bytes under their hash and returns the key to read them back with. Idempotent. */
+  put(sha256: string, data: Uint8Array): Promise<string>;
+  get(key: string): Promise<Uint8Array>;
+}
+
+const SHA256 = /^[0-9a-f]{64}$/;
+
+export function folderStorage(dir = path.join(process.cwd(), ".data", "files")): FileStorage {
+  const root = path.resolve(dir);
+  // Two levels of fan-out keep any one folder small once the corpus has many thousand files.
+  const keyFor = (sha: string) => `${sha.slice(0, 2)}/${sha.slice(2, 4)}/${sha}`;
+  const resolveKey = (key: string) => {
+    const full = path.resolve(root, key);
+    // A key comes from our own database, but never let one walk out of the storage folder.
+    if (!full.startsWith(root + path.sep)) throw new Error(`Storage key outside the storage folder: ${key}`);
+    return full;
+  };
+  return {
+    async put(sha256, data) {
+      if (!SHA256.test(sha256)) throw new Error(`Not a SHA-256 hex digest: ${sha256}`);
+      const key = keyFor(sha256);
+      const full = resolveKey(key);
+      try {
+        await fs.access(full);
+        return key;
+      } catch {
+        // not stored yet
+      }
+      await fs.mkdir(path.dirname(full), { recursive: true });
+      // Write then rename: a reader (or a concurrent upload of the same file) never sees half a file.
+      const tmp = `${full}.${process.pid}.${randomBytes(4).toString("hex")}.tmp`;
+      await fs.writeFile(tmp, data);
+      await fs.rename(tmp, full);
+      return key;
+    },
+    async get(key) {
+      const buf = await fs.readFile(resolveKey(key));
+      return new Uint8Array(buf.buffer, buf.byteOffset, buf.byteLength);
+    },
+  };
+}
+
+/** In-memory storage for tests and one-off scripts. */
+export function memoryStorage(): FileStorage {
+  const files = new Map<string, Uint8Array>();
+  return {
+    async put(sha256, data) {
+      files.set(sha256, data.slice());
+      return sha256;
+    },
+    async get(key) {
+      const f = files.get(key);
+      if (!f) throw new Error(`No stored file ${key}`);
+      return f;
+    },
+  };
+}
+
+let defaultStorage: FileStorage | null = null;
+/** The process-wide storage (ECHOLINE_FILES_DIR overrides the folder). */
+export function getStorage(): FileStorage {
+  defaultStorage ??= folderStorage(process.env.ECHOLINE_FILES_DIR ?? undefined);
+  return defaultStorage;
+}
