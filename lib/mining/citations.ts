@@ -1,0 +1,154 @@
+// In-text citations: author–year (parenthetical and narrative) and numbered ([12], [3, 5], [4–6], [4]–[6]).
+// Decision on "as cited in": the work named before "as cited in" is the one the author did not read, so it
+// is returned with secondary: true and citedIn = the work it was read in; the citing source is also
+// returned on its own (secondary: false), because the author did read that one.
+import type { Reference, StatementCitation } from "./contract";
+
+const SURNAME = String.raw`(?:(?:van der|van den|van|von|de|del|della|da|di|du|le|la|al|el)\s)?\p{Lu}[\p{L}'’]+(?:[-–]\p{Lu}?[\p{L}'’]+)*`;
+const AUTHORS = String.raw`${SURNAME}(?:\s+et\s+al\.?|(?:,\s*${SURNAME})*,?\s*(?:&|and)\s*${SURNAME})?`;
+const YEAR = String.raw`(?:1[6-9]\d{2}|20\d{2})[a-z]?|n\.d\.|in press|forthcoming`;
+const LOCATOR = String.raw`(?:pp?\.|pages?|chaps?\.|chapters?|ch\.|secs?\.|sections?|§|paras?\.|paragraphs?|¶|fig\.|figs?\.|tables?|notes?|n\.|vols?\.|ll?\.|lines?)\s*[\dA-Za-z]+(?:\.\d+)*(?:\s*[-–—]\s*[\dA-Za-z]+(?:\.\d+)*)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?)*`;
+
+const partRe = new RegExp(String.raw`^(?:(?:see|e\.g\.|cf\.|see also|also|for example|for a review, see)[,\s]+)?(${AUTHORS}),?\s+((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?$`, "u");
+const yearsLocatorRe = new RegExp(String.raw`^((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?(?:\s*;\s*(.*))?$`, "u");
+const narrativeRe = new RegExp(String.raw`(${AUTHORS})\s+\(([^()]*)\)`, "gu");
+const notNames = new Set([
+  "Table", "Tables", "Figure", "Figures", "Fig", "Study", "Studies", "Wave", "Sample", "Model", "Appendix", "Section",
+  "Experiment", "Phase", "Time", "Grade", "Year", "In", "The", "Since", "During", "From", "Until", "After", "Before",
+  "Version", "Step", "Stage", "Chapter", "Part", "Item", "Items", "Scale", "Round", "Trial", "Cohort", "Survey",
+]);
+
+function normAuthors(a: string): string {
+  const t = a.replace(/\s+/g, " ").trim().replace(/\s+and\s+/g, " & ").replace(/,\s*&/g, " &").replace(/\bet al(?!\.)/, "et al.");
+  return t;
+}
+
+export type FoundCitation = StatementCitation;
+
+function splitYears(years: string): string[] {
+  return years.split(/\s*,\s*/).filter(Boolean);
+}
+
+/** One part of a parenthetical list, e.g. "Okafor & Lindqvist, 1994, p. 112" or "Whitcombe, 2000, as cited in X, 2014". */
+function parsePart(part: string): FoundCitation[] {
+  const p = part.trim().replace(/\s+/g, " ");
+  const ci = /^(.*?),?\s+as cited in\s+(.*)$/i.exec(p);
+  if (ci) {
+    const original = parsePart(ci[1]);
+    const citing = parsePart(ci[2]);
+    if (original.length && citing.length) {
+      return [
+        ...original.map((o) => ({ ...o, secondary: true, citedIn: { authors: citing[0].authors, year: citing[0].year } })),
+        ...citing,
+      ];
+    }
+    return [];
+  }
+  const m = partRe.exec(p);
+  if (!m) return [];
+  const authors = normAuthors(m[1]);
+  if (notNames.has(authors.split(" ")[0])) return [];
+  const years = splitYears(m[2]);
+  return years.map((year, i) => ({
+    authors,
+    year,
+    locator: i === years.length - 1 && m[3] ? m[3].replace(/\s+/g, " ") : null,
+    secondary: false,
+  }));
+}
+
+function parseParenthetical(inner: string): FoundCitation[] {
+  // Parts are separated by ";". A part without its own author ("2003, 2005") is not allowed after a ";".
+  const out: FoundCitation[] = [];
+  for (const part of inner.split(/\s*;\s*/)) out.push(...parsePart(part));
+  return out;
+}
+
+function authorsFromReference(ref: Reference): string {
+  const surnames = ref.authors.map((a) => a.replace(/,.*$/, "").replace(/^(?:\p{Lu}\.\s*)+/u, "").trim()).filter(Boolean);
+  if (surnames.length === 0) return ref.title ?? ref.raw.slice(0, 40);
+  if (surnames.length === 1) return surnames[0];
+  if (surnames.length === 2) return `${surnames[0]} & ${surnames[1]}`;
+  return `${surnames[0]} et al.`;
+}
+
+function expandNumbers(spec: string): number[] {
+  const nums: number[] = [];
+  for (const piece of spec.split(/\s*,\s*/)) {
+    const r = /^(\d+)\s*[-–—]\s*(\d+)$/.exec(piece);
+    if (r) {
+      const a = Number(r[1]);
+      const b = Number(r[2]);
+      if (b >= a && b - a < 50) for (let i = a; i <= b; i++) nums.push(i);
+    } else if (/^\d+$/.test(piece)) nums.push(Number(piece));
+  }
+  return nums;
+}
+
+const numberedRe = new RegExp(String.raw`\[(\d+(?:\s*[-–—,]\s*\d+)*)(?:\s*,\s*(${LOCATOR}))?\](?:\s*[-–—]\s*\[(\d+)\])?`, "giu");
+
+/** All in-text citations of one sentence, in order of appearance. */
+export function findCitations(sentence: string, numbered: Map<number, Reference>): FoundCitation[] {
+  const found: { at: number; c: FoundCitation[] }[] = [];
+  const consumed: [number, number][] = [];
+  // Parenthetical groups (balanced one level deep).
+  for (const m of sentence.matchAll(/\(([^()]*(?:\([^()]*\)[^()]*)*)\)/g)) {
+    const c = parseParenthetical(m[1]);
+    if (c.length) {
+      found.push({ at: m.index!, c });
+      consumed.push([m.index!, m.index! + m[0].length]);
+    }
+  }
+  for (const m of sentence.matchAll(narrativeRe)) {
+    const start = m.index!;
+    if (consumed.some(([a, b]) => start >= a && start < b)) continue;
+    const authorsRaw = m[1];
+    const first = authorsRaw.split(/\s/)[0];
+    if (notNames.has(first)) continue;
+    const inner = yearsLocatorRe.exec(m[2].trim());
+    if (!inner) continue;
+    const authors = normAuthors(authorsRaw);
+    const years = splitYears(inner[1]);
+    const list: FoundCitation[] = years.map((year, i) => ({
+      authors,
+      year,
+      locator: i === years.length - 1 && inner[2] ? inner[2].replace(/\s+/g, " ") : null,
+      secondary: false,
+    }));
+    if (inner[3]) list.push(...parseParenthetical(inner[3]));
+    found.push({ at: start, c: list });
+  }
+  for (const m of sentence.matchAll(numberedRe)) {
+    let nums = expandNumbers(m[1]);
+    if (m[3]) {
+      const last = nums.at(-1) ?? 0;
+      const to = Number(m[3]);
+      if (to > last && to - last < 50) for (let i = last + 1; i <= to; i++) nums.push(i);
+    }
+    nums = nums.filter((n) => numbered.size === 0 || numbered.has(n));
+    const list = nums.map((n, i): FoundCitation => {
+      const ref = numbered.get(n);
+      return {
+        authors: ref ? authorsFromReference(ref) : `[${n}]`,
+        year: ref?.year ?? "n.d.",
+        locator: i === nums.length - 1 && m[2] ? m[2].replace(/\s+/g, " ") : null,
+        secondary: false,
+        number: n,
+      };
+    });
+    if (list.length) found.push({ at: m.index!, c: list });
+  }
+  return found.sort((a, b) => a.at - b.at).flatMap((f) => f.c);
+}
+
+/** The sentence with its citations taken out, so that years and page numbers are not read as values. */
+export function stripCitations(sentence: string): string {
+  let s = sentence.replace(/\(([^()]*(?:\([^()]*\)[^()]*)*)\)/g, (m, inner: string) =>
+    parseParenthetical(inner).length ? " " : m,
+  );
+  s = s.replace(narrativeRe, (m, authors: string, inner: string) =>
+    yearsLocatorRe.test(inner.trim()) && !notNames.has(authors.split(/\s/)[0]) ? authors : m,
+  );
+  s = s.replace(numberedRe, " ");
+  return s.replace(/\s+/g, " ");
+}

@@ -1,0 +1,278 @@
+// Public API of the miner, shared by the CLI (lib/mining/cli.ts) and the background worker.
+import { PDFParse } from "pdf-parse";
+import { findCitations, stripCitations } from "./citations";
+import {
+  ContractLine, type DocumentCitation, type ErrorCode, type ErrorLine, type Reference, type Section, type Statement,
+  SuccessLine,
+} from "./contract";
+import { checkJats, looksLikeXml, parseJats } from "./jats";
+import { compileProcedures, defaultProcedures, type ProcedurePattern } from "./procedures";
+import { normaliseDoi, parseReferenceList } from "./references";
+import { isReferenceHeading, parseHeading } from "./sections";
+import { splitSentences } from "./sentences";
+import { extractStatements } from "./statements";
+import { repairPages } from "./text-repair";
+
+export type { ProcedurePattern } from "./procedures";
+export { defaultProcedures } from "./procedures";
+export * from "./contract";
+
+export type ArticleMeta = {
+  title: string | null;
+  authors: string[];
+  year: string | null;
+  doi: string | null;
+  venue: string | null;
+  licence: string | null;
+  firstPageText: string | null;
+};
+export type MineOutput = { line: ContractLine; timings: { readMs: number; mineMs: number }; meta: ArticleMeta };
+export type MinerOptions = { procedures?: ProcedurePattern[]; maxPages?: number; maxBytes?: number; timeoutMs?: number };
+export type Miner = { mine(input: { data: Uint8Array; filename: string }): Promise<MineOutput>; close(): Promise<void> };
+export type MineTextOptions = { procedures?: ProcedurePattern[]; file?: string };
+export type MinedDocument = Omit<SuccessLine, "file">;
+
+export const DEFAULT_MAX_BYTES = 50 * 1024 * 1024;
+export const DEFAULT_MAX_PAGES = 2000;
+export const DEFAULT_TIMEOUT_MS = 60_000;
+
+const emptyMeta = (): ArticleMeta => ({ title: null, authors: [], year: null, doi: null, venue: null, licence: null, firstPageText: null });
+
+class MineError extends Error {
+  constructor(readonly code: ErrorCode, message: string) {
+    super(message);
+  }
+}
+
+type Block = { section: Section; chunks: { page: number; text: string }[] };
+
+/** Mine already-extracted page texts (one string per page). */
+export function minePages(pages: string[], opts: MineTextOptions & { referenceLines?: string[] } = {}): MinedDocument {
+  const matchProcedure = compileProcedures(opts.procedures ?? defaultProcedures);
+  const blocks: Block[] = [];
+  const refLines: string[] = [...(opts.referenceLines ?? [])];
+  let section: Section = "unknown";
+  let topSection: Section = "unknown";
+  let inRefs = false;
+  let current: Block = { section, chunks: [] };
+  blocks.push(current);
+  pages.forEach((pageText, pi) => {
+    const page = pi + 1;
+    for (const line of pageText.split("\n")) {
+      const t = line.trim();
+      if (isReferenceHeading(t)) {
+        inRefs = true;
+        continue;
+      }
+      if (inRefs) {
+        // An appendix after the references goes back to the body.
+        if (/^(?:appendix|appendices|supplementary material)\b/i.test(t) && t.length < 60) inRefs = false;
+        else {
+          refLines.push(line);
+          continue;
+        }
+      }
+      const h = t ? parseHeading(t) : null;
+      // A line inside a paragraph (previous line did not end a sentence) is not a heading.
+      const prev = current.chunks.at(-1)?.text.trimEnd() ?? "";
+      if (h && (!prev || /[.!?:)"”]$/.test(prev) || /\n\s*$/.test(current.chunks.at(-1)?.text ?? "\n"))) {
+        if (h.section) {
+          if (h.level === 1 || ["results", "discussion", "introduction"].includes(h.section) || topSection === "unknown" || topSection === "other") {
+            topSection = h.section;
+          }
+          section = h.section === "methods" && ["results", "discussion"].includes(topSection) && h.level > 1 ? topSection : h.section;
+          if (h.level === 1) topSection = h.section;
+        } else if (h.level > 1 || (section !== "unknown" && section !== "other" && !/^\d/.test(t))) {
+          section = topSection === "unknown" ? "other" : section;
+        } else {
+          section = section === "unknown" && blocks.length === 1 && !current.chunks.length ? "unknown" : "other";
+          if (h.level === 1 && /^\d/.test(t)) topSection = "other";
+        }
+        current = { section, chunks: [] };
+        blocks.push(current);
+        continue;
+      }
+      current.chunks.push({ page, text: line + "\n" });
+    }
+  });
+
+  const references: Reference[] = refLines.some((l) => l.trim()) ? parseReferenceList(refLines.join("\n")) : [];
+  const numbered = new Map<number, Reference>();
+  for (const r of references) if (r.number) numbered.set(r.number, r);
+
+  const statements: Statement[] = [];
+  const citations: DocumentCitation[] = [];
+  for (const block of blocks) {
+    if (!block.chunks.length) continue;
+    let flat = "";
+    const starts: { at: number; page: number }[] = [];
+    for (const c of block.chunks) {
+      starts.push({ at: flat.length, page: c.page });
+      flat += `${c.text.replace(/\s+/g, " ").trim()} `;
+    }
+    let cursor = 0;
+    for (const sentence of splitSentences(flat)) {
+      const at = flat.indexOf(sentence.slice(0, 20), cursor);
+      const pos = at >= 0 ? at : cursor;
+      cursor = at >= 0 ? at + sentence.length : cursor;
+      let page = starts[0].page;
+      for (const s of starts) if (s.at <= pos) page = s.page;
+      const cites = findCitations(sentence, numbered);
+      for (const c of cites) citations.push({ ...c, page, sentence });
+      const stripped = stripCitations(sentence);
+      for (const st of extractStatements(stripped, matchProcedure)) {
+        statements.push({ page, section: block.section, sentence, ...st, citations: cites });
+      }
+    }
+  }
+  return { pages: pages.length, statements, citations, references };
+}
+
+/** Mine plain text. A form feed (\f) separates pages, as pdftotext writes them. */
+export function mineText(text: string, opts: MineTextOptions = {}): MinedDocument {
+  const pages = text.split("\f");
+  if (pages.length > 1 && !pages.at(-1)!.trim()) pages.pop();
+  return minePages(pages, opts);
+}
+
+function metaFromText(firstPage: string): Partial<ArticleMeta> {
+  const lines = firstPage.split("\n").map((l) => l.trim()).filter(Boolean);
+  const year = /\b(19[5-9]\d|20\d{2})\b/.exec(lines.slice(0, 8).join(" "))?.[1] ?? null;
+  const licence = /https?:\/\/creativecommons\.org\/[^\s)]+/i.exec(firstPage)?.[0] ?? (/\bCC[- ]BY(?:[- ](?:NC|SA|ND))*(?:[- ]\d\.\d)?\b/.exec(firstPage)?.[0] ?? null);
+  return { title: lines[0] ?? null, year, doi: normaliseDoi(firstPage), licence, firstPageText: firstPage };
+}
+
+function errorOutput(file: string, code: ErrorCode, message: string, readMs = 0, mineMs = 0): MineOutput {
+  const line: ErrorLine = { file, error: { code, message } };
+  return { line, timings: { readMs, mineMs }, meta: emptyMeta() };
+}
+
+function withTimeout<T>(p: Promise<T>, ms: number, onTimeout: () => void): Promise<T> {
+  let timer: NodeJS.Timeout | undefined;
+  return Promise.race([
+    p,
+    new Promise<T>((_r, reject) => {
+      timer = setTimeout(() => {
+        onTimeout();
+        reject(new MineError("timeout", `Mining took longer than ${Math.round(ms / 1000)} s and was stopped; the file may be damaged or unusually complex.`));
+      }, ms);
+      timer.unref?.();
+    }),
+  ]).finally(() => clearTimeout(timer));
+}
+
+function classifyPdfError(err: unknown): MineError {
+  if (err instanceof MineError) return err;
+  const name = err instanceof Error ? err.name : "";
+  const msg = err instanceof Error ? err.message : String(err);
+  if (name === "PasswordException" || /password/i.test(msg)) {
+    return new MineError("encrypted", "The PDF is encrypted (password protected); remove the protection before uploading it.");
+  }
+  return new MineError("corrupt", `The PDF could not be read; it looks truncated or damaged (${msg.slice(0, 200)}).`);
+}
+
+async function readPdf(data: Uint8Array, maxPages: number, timeoutMs: number): Promise<{ pages: string[]; info: Record<string, unknown> }> {
+  // pdf.js takes ownership of (and may detach) the buffer it is given, so it gets a copy.
+  // One parser per document: PDFParse binds its data at construction; the pdf.js worker behind it is shared.
+  const parser = new PDFParse({ data: new Uint8Array(data), verbosity: 0, stopAtErrors: false });
+  try {
+    return await withTimeout(
+      (async () => {
+        const info = await parser.getInfo();
+        if (info.total === 0) throw new MineError("zero_pages", "The PDF has no pages.");
+        if (info.total > maxPages) throw new MineError("too_many_pages", `The PDF has ${info.total} pages; the limit is ${maxPages}.`);
+        const text = await parser.getText({ pageJoiner: "" });
+        const pages = text.pages.sort((a, b) => a.num - b.num).map((p) => p.text);
+        const raw: unknown = info.info;
+        const infoDict = raw && typeof raw === "object" ? (raw as Record<string, unknown>) : {};
+        return { pages, info: infoDict };
+      })(),
+      timeoutMs,
+      () => void parser.destroy().catch(() => undefined),
+    );
+  } catch (err) {
+    throw classifyPdfError(err);
+  } finally {
+    await parser.destroy().catch(() => undefined);
+  }
+}
+
+function decodeUtf8(data: Uint8Array): string | null {
+  try {
+    const t = new TextDecoder("utf-8", { fatal: true }).decode(data);
+    // Binary that happens to be valid UTF-8 is full of control characters.
+    const controls = (t.match(/[\u0000-\u0008\u000e-\u001f]/g) ?? []).length;
+    return controls > t.length * 0.01 ? null : t.replace(/^\uFEFF/, "");
+  } catch {
+    return null;
+  }
+}
+
+export function createMiner(options: MinerOptions = {}): Miner {
+  const maxBytes = options.maxBytes ?? DEFAULT_MAX_BYTES;
+  const maxPages = options.maxPages ?? DEFAULT_MAX_PAGES;
+  const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
+  const procedures = options.procedures ?? defaultProcedures;
+  let closed = false;
+
+  async function mine(input: { data: Uint8Array; filename: string }): Promise<MineOutput> {
+    const file = input.filename;
+    if (closed) return errorOutput(file, "internal", "The miner was closed.");
+    const t0 = performance.now();
+    const data = input.data;
+    try {
+      if (data.byteLength > maxBytes) {
+        return errorOutput(file, "too_large", `The file is ${(data.byteLength / 1048576).toFixed(1)} MB; the limit is ${(maxBytes / 1048576).toFixed(0)} MB.`);
+      }
+      if (data.byteLength === 0) return errorOutput(file, "empty", "The file is empty.");
+      const head = new TextDecoder("latin1").decode(data.subarray(0, 1024));
+      if (head.includes("%PDF-")) {
+        const { pages: rawPages, info } = await readPdf(data, maxPages, timeoutMs);
+        const t1 = performance.now();
+        const pages = repairPages(rawPages);
+        const chars = pages.join("").replace(/\s/g, "").length;
+        if (chars < Math.max(20, pages.length * 5)) {
+          return errorOutput(file, "no_text_layer", `The PDF's ${pages.length} page(s) carry (almost) no text layer; it looks scanned and needs OCR before it can be mined.`, t1 - t0);
+        }
+        const doc = minePages(pages, { procedures });
+        const line = SuccessLine.parse({ file, ...doc });
+        const fromText = metaFromText(pages[0] ?? "");
+        const str = (k: string) => (typeof info[k] === "string" && (info[k] as string).trim() ? (info[k] as string).trim() : null);
+        const meta: ArticleMeta = {
+          ...emptyMeta(),
+          ...fromText,
+          title: str("Title") ?? fromText.title ?? null,
+          authors: str("Author")?.split(/\s*(?:;|,| and |&)\s*/).filter(Boolean) ?? [],
+        };
+        return { line, timings: { readMs: t1 - t0, mineMs: performance.now() - t1 }, meta };
+      }
+      const text = decodeUtf8(data);
+      if (text === null) return errorOutput(file, "not_pdf", "The file is neither a PDF, JATS XML nor UTF-8 text; it cannot be mined.");
+      if (!text.trim()) return errorOutput(file, "empty", "The file contains no text.");
+      if (looksLikeXml(text.slice(0, 200))) {
+        const check = checkJats(text);
+        if (!check.ok) return errorOutput(file, check.code, check.message);
+        const jats = parseJats(text);
+        const t1 = performance.now();
+        const doc = minePages([jats.lines.join("\n")], { procedures, referenceLines: jats.referenceLines });
+        const line = SuccessLine.parse({ file, ...doc });
+        return { line, timings: { readMs: t1 - t0, mineMs: performance.now() - t1 }, meta: { ...jats.meta, firstPageText: null } };
+      }
+      const t1 = performance.now();
+      const doc = mineText(text, { procedures });
+      const line = SuccessLine.parse({ file, ...doc });
+      const fromText = metaFromText(text.split("\f")[0]);
+      return { line, timings: { readMs: t1 - t0, mineMs: performance.now() - t1 }, meta: { ...emptyMeta(), ...fromText, firstPageText: null } };
+    } catch (err) {
+      const e = err instanceof MineError ? err : new MineError("internal", `Unexpected miner failure: ${err instanceof Error ? err.message : String(err)}`);
+      return errorOutput(file, e.code, e.message, performance.now() - t0);
+    }
+  }
+
+  return {
+    mine,
+    async close() {
+      closed = true;
+    },
+  };
+}

@@ -1,0 +1,68 @@
+// Sentence segmentation for methods prose.
+// natural's SentenceTokenizer (deep import: the package root loads database clients and dotenv) does the
+// splitting at terminal punctuation and quotes. It does not serve on its own for scholarly text: it splits
+// ".85" (decimals without a leading zero, the APA style for statistics bounded by 1), "Fig. 2", "p. 12",
+// "et al." and initials, and its own abbreviation option matches substrings anywhere ("p." inside
+// "step."). So those dots are masked before it runs and restored after.
+import SentenceTokenizer from "natural/lib/natural/tokenizers/sentence_tokenizer.js";
+
+const DOT = "\u2024"; // ONE DOT LEADER: never present in extracted text, same length as "."
+
+const abbreviations = [
+  "e.g.", "i.e.", "et al.", "etc.", "vs.", "cf.", "ca.", "approx.", "resp.", "Fig.", "Figs.", "Tab.", "No.", "Nos.",
+  "Vol.", "vol.", "no.", "pp.", "p.", "chap.", "Chap.", "ch.", "sec.", "Sec.", "para.", "Eq.", "eq.", "Dr.", "Mr.",
+  "Ms.", "Mrs.", "Prof.", "Inc.", "Ltd.", "Co.", "St.", "Ed.", "Eds.", "ed.", "eds.", "Rev.", "Suppl.", "min.",
+  "max.", "Jr.", "approx.", "viz.", "al.", "Proc.", "Symp.", "Univ.", "Dept.", "n.d.", "S.D.", "M.A.", "Ph.D.",
+];
+
+function escape(s: string): string {
+  return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+}
+const abbrevRe = new RegExp(
+  `(?<![\\p{L}])(${abbreviations.sort((a, b) => b.length - a.length).map(escape).join("|")})`,
+  "gu",
+);
+
+function mask(text: string): string {
+  let t = text.replace(abbrevRe, (m) => m.replaceAll(".", DOT));
+  // decimals: .85, 0.85, 4.2.1, "α = .05"
+  t = t.replace(/(^|[\s(=<>≥≤~±\[,;:–—-])\.(\d)/g, (_m, a: string, d: string) => `${a}${DOT}${d}`);
+  t = t.replace(/(\d)\.(\d)/g, `$1${DOT}$2`);
+  t = t.replace(/(\d)\.(\d)/g, `$1${DOT}$2`);
+  // initials: "K. Dervishi", "R. B. Kowalczyk", "Okafor, E." inside a sentence
+  t = t.replace(/(?<![\p{L}])(\p{Lu})\.(?=\s*(\p{Lu}[\p{L}'’-]|\p{Lu}\.|,|&|and\b|\())/gu, `$1${DOT}`);
+  // dotted DOIs / URLs / section numbers "2.1"
+  t = t.replace(/\b(10\.\d{4,9}\/\S+|https?:\/\/\S+|doi:\S+)/gi, (m) => m.replaceAll(".", DOT));
+  return t;
+}
+
+const tokenizer = new SentenceTokenizer([], true);
+
+export function splitSentences(text: string): string[] {
+  const flat = text.replace(/\s+/g, " ").trim();
+  if (!flat) return [];
+  const masked = mask(flat);
+  const raw = tokenizer.tokenize(masked);
+  const out: string[] = [];
+  for (const s of raw) {
+    const restored = s.replaceAll(DOT, ".").trim();
+    if (!restored) continue;
+    // natural splits before a lower-case continuation ("… (p. 12). and then") only rarely; a piece that
+    // starts lower-case or with a closing bracket belongs to the previous sentence.
+    if (out.length && /^[a-z)\],;]/.test(restored)) out[out.length - 1] += ` ${restored}`;
+    else out.push(restored);
+  }
+  return out;
+}
+
+export function normaliseSentence(s: string): string {
+  return s
+    .normalize("NFKC")
+    .replace(/[‐‑‒–—−]/g, "-")
+    .replace(/[“”„]/g, '"')
+    .replace(/[‘’]/g, "'")
+    .replace(/\s+/g, " ")
+    .replace(/\s+([.,;:)])/g, "$1")
+    .trim()
+    .toLowerCase();
+}
