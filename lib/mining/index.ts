@@ -10,7 +10,7 @@ import { compileProcedures, defaultProcedures, type ProcedurePattern } from "./p
 import { normaliseDoi, parseReferenceList } from "./references";
 import { isReferenceHeading, parseHeading } from "./sections";
 import { splitSentences } from "./sentences";
-import { extractStatements } from "./statements";
+import { extractStatements, lastStatistic } from "./statements";
 import { repairPages } from "./text-repair";
 
 export type { ProcedurePattern } from "./procedures";
@@ -111,6 +111,7 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
       flat += `${c.text.replace(/\s+/g, " ").trim()} `;
     }
     let cursor = 0;
+    let previousStatistic: ReturnType<typeof lastStatistic> = null;
     for (const sentence of splitSentences(flat)) {
       const at = flat.indexOf(sentence.slice(0, 20), cursor);
       const pos = at >= 0 ? at : cursor;
@@ -120,7 +121,9 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
       const cites = findCitations(sentence, numbered);
       for (const c of cites) citations.push({ ...c, page, sentence });
       const stripped = stripCitations(sentence);
-      for (const st of extractStatements(stripped, matchProcedure)) {
+      const found = extractStatements(stripped, matchProcedure, { hasCitation: cites.length > 0, previousStatistic });
+      previousStatistic = lastStatistic(stripped) ?? previousStatistic;
+      for (const st of found) {
         statements.push({ page, section: block.section, sentence, ...st, citations: cites });
       }
     }

@@ -26,10 +26,13 @@ export const defaultProcedures: ProcedurePattern[] = [
     label: "Single-factor test as proof of no common method bias",
     description:
       "A single-factor (one-factor) test presented as evidence that common method variance or bias is absent or not a concern.",
-    allOf: ["(single[- ]factor|one[- ]factor|single (general )?factor|first factor|harman)"],
+    allOf: ["(single[- ]factor|one[- ]factor|single (general )?factor|first factor|harman)", "(common[- ]method|method (variance|bias)|\\bcmv\\b|\\bcmb\\b)"],
+    // The sentence must present the test as settling the question.
     anyOf: [
-      "(common[- ]method|method (variance|bias))",
-      "\\bcmv\\b|\\bcmb\\b",
+      "not (a |an )?(serious )?(concern|problem|issue|threat)",
+      "\\b(absent|ruled out|no evidence|unlikely|not present|not a pervasive|was not found|did not (pose|affect|exist|bias))",
+      "(demonstrat|prov|confirm|establish|show)\\w* that (common[- ]method|method|cmv|cmb|there)",
+      "(is|was) not (an? )?(significant|substantial|major)",
     ],
     noneOf: ["(cannot|does not|do not|is not able to|unable to) (rule out|prove|demonstrate|show)", "insensitive", "limitation"],
   },

@@ -22,7 +22,7 @@ const LEXICON: [RegExp, StatisticKey, { weak?: boolean; significance?: boolean }
   [/\bsplit[-–\s]half reliability|\bstability coefficients?|\brho_?A\b|\bρ_?A\b|\bfirst[-–\s]stage F(?:\s*statistic)?|\b(?:A)?GFI\b|\bNFI\b|\bIFI\b/gi, "other"],
   [/\bsignificance level|\b(?:alpha|α)[-\s]level|\blevel of significance|\bstatistical significance|\btype I error rate/gi, "p_value", { significance: true }],
   [/\bCronbach['’]?s?\s+(?:alpha|α)s?|\bcoefficient (?:alpha|α)s?|\b(?:alpha|α) coefficients?|\balphas?\b|α/gi, "cronbach_alpha"],
-  [/\bMcDonald['’]?s?\s+(?:omega|ω)|\bomega(?: total| coefficients?)?\b|\bω(?:_?t)?/gi, "mcdonald_omega"],
+  [/\bMcDonald['’]?s?\s+(?:omega|ω)|\bomega(?: total| coefficients?)?\b|ω(?:_?t)?/gi, "mcdonald_omega"],
   [/\baverage variance extracted|\bAVEs?\b|\bvariance extracted/gi, "ave"],
   [/\bheterotrait[-–\s]monotrait(?: ratios?)?(?: of correlations)?|\bHTMT\b/gi, "htmt"],
   [/\bvariance inflation factors?|\bVIFs?\b/gi, "vif"],
@@ -48,7 +48,7 @@ const BOUNDED = new Set<StatisticKey>([
 ]);
 
 // Numbers that belong to something that is not a tracked statistic: test statistics, descriptives, CIs.
-const BLOCKER = /(?:\b(?:t|F|z|r|b|B|β|γ|d|g|OR|IRR|HR|RR|SE|SD|M|N|n|df|Mdn|χ²|χ2|W|U|H)\s*(?:\([^)]*\))?\s*[=<>≤≥]\s*[-−–]?$|\bodds ratio (?:of\s*)?$|\beffect size (?:of\s*)?$|\b(?:9[059]|99)\s*%\s*CI\s*\[?$|\bCI\s*\[?$|\bmedian\s*$|\bmean(?: age)?(?: of)?\s*$|\baged?\s*$)/;
+const BLOCKER = /(?:(?<![\/\w])(?:t|F|z|r|b|B|β|γ|d|g|OR|IRR|HR|RR|SE|SD|M|N|n|df|Mdn|χ²|χ2|W|U|H)\s*(?:\([^)]*\))?\s*[=<>≤≥]\s*[-−–]?$|\bodds ratio (?:of\s*)?$|\beffect size (?:of\s*)?$|\b(?:9[059]|99)\s*%\s*CI\s*\[?$|\bCI\s*\[?$|\bmedian\s*$|\bmean(?: age)?(?: of)?\s*$|\baged?\s*$)/;
 
 const CUT_NOUN = /(?:threshold|cut[-\s]?off|criterion|minimum|maximum|benchmark|rule of thumb|recommended (?:value|level))/i;
 const THRESHOLD_CUE = new RegExp(
@@ -67,7 +67,7 @@ const THRESHOLD_CUE = new RegExp(
 const REPORTED_CUE = /\b(?:reported|observed|obtained|achieved|in (?:our|the present|this) (?:data|sample|study)|in the (?:calibration|validation|present) sample|yielded|were between|ranged)\b/i;
 const CONTEXT_CUE = new RegExp(
   [
-    "exploratory", "early stages?", "depend\\w*", "(?:is|are|may be|can be) (?:still )?(?:acceptable|sufficient|adequate|tolerated)\\s+(?:if|when|provided|in|for)",
+    "(?:for|in) exploratory (?:research|studies|work|purposes|analys[ie]s|stages?)", "early stages?", "depend\\w*", "(?:is|are|may be|can be) (?:still )?(?:acceptable|sufficient|adequate|tolerated)\\s+(?:if|when|provided|in|for)",
     "can be (?:used|tolerated|accepted|retained)", "may be (?:retained|regarded|sufficient|used|tolerated|too|acceptable)",
     "may not be", "whereas", "\\bwhile\\b", "purposes?", "for decisions", "for (?:new|newly|established|small|large|short|long)",
     "more liberal", "stricter", "sometimes", "given the", "with fewer than", "fewer than \\d+", "with only", "longer scales",
@@ -116,11 +116,13 @@ function comparatorBefore(gap: string): Comparator | null {
     [/(?:≤|<=|not exceed|no more than|not more than|at most|a maximum of|maximum of|up to|not greater than|not above|no \S+ exceeded|none exceeded)\s*(?:the\s*)?$/, "<="],
     [/(?:>|above|exceed(?:s|ed|ing)?|greater than|higher than|larger than|more than|over)\s*(?:the\s*)?$/, ">"],
     [/(?:<|below|less than|lower than|smaller than|under|beneath)\s*(?:the\s*)?$/, "<"],
-    [/(?:=|was|were|is|are|of|reached)\s*$/, "="],
   ];
   for (const [re, c] of table) if (re.test(g)) return c;
+  if (/(?:=)\s*$/.test(g)) return "=";
   // A cut-off noun with its verb further back: "exceeds the conventional threshold of 10".
-  const w = /(not exceed|no more than|at least|minimum|maximum|exceed\w*|above|greater than|higher than|below|less than|lower than|under|smaller than)\b[^.;]*$/.exec(g);
+  const w = /(?:threshold|cut[-\s]?off|criterion|benchmark|minimum|maximum)\s*(?:of|at)?\s*$/.test(g)
+    ? /(not exceed|no more than|at least|minimum|maximum|exceed\w*|above|greater than|higher than|below|less than|lower than|under|smaller than)\b[^.;]*$/.exec(g)
+    : null;
   if (w) {
     const word = w[1];
     if (/not exceed|no more than|maximum/.test(word)) return "<=";
@@ -128,6 +130,7 @@ function comparatorBefore(gap: string): Comparator | null {
     if (/exceed|above|greater|higher/.test(word)) return ">";
     return "<";
   }
+  if (/(?:was|were|is|are|of|reached)\s*$/.test(g)) return "=";
   return null;
 }
 
@@ -142,7 +145,14 @@ function isResultSignificance(s: string): boolean {
   return /\b(?:was|were|is|are|remained|not|all|be)\s+(?:statistically\s+)?significant\s+at\b/i.test(s) && !/consider|regard|deem|treat/i.test(s);
 }
 
-export function extractStatements(sentence: string, matchProcedure: (s: string) => ProcedurePattern | null): RawStatement[] {
+export type SentenceContext = { hasCitation?: boolean; previousStatistic?: StatisticKey | null };
+
+/** The statistic named last in a sentence, for the next sentence that says "a cut-off of .90" without naming it. */
+export function lastStatistic(sentence: string): StatisticKey | null {
+  return findMentions(sentence).at(-1)?.key ?? null;
+}
+
+export function extractStatements(sentence: string, matchProcedure: (s: string) => ProcedurePattern | null, ctx: SentenceContext = {}): RawStatement[] {
   const out: RawStatement[] = [];
   const proc = matchProcedure(sentence);
   if (proc) out.push({ kind: "procedure", statistic: null, comparator: null, value: null, framing: null, procedure: proc.key });
@@ -153,14 +163,18 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
     .replace(/\bICC\s*\((\d)(?:,\s*(\d))?\)/g, "ICC")
     .replace(/\b(?:19|20)\d{2}\b/g, (y) => " ".repeat(y.length));
   const mentions = findMentions(s);
-  const nums = findNumbers(s);
-  if (!mentions.length || !nums.length) return out;
+  if (!mentions.length && ctx.previousStatistic && CUT_NOUN.test(s) && !/\b(?:items?|participants|respondents)\b/i.test(s)) {
+    // "A more liberal cut-off of 0.90 can be used …" continues the statistic of the sentence before.
+    const m = CUT_NOUN.exec(s);
+    if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
+  }
+  const nums = findNumbers(s).filter((n) => !mentions.some((m) => n.start >= m.start && n.start < m.end));
 
   const sentenceThreshold = THRESHOLD_CUE.test(s);
   const sentenceReported = REPORTED_CUE.test(s);
   const levelWords = new Set([...s.matchAll(LEVEL_WORDS)].map((m) => m[1].toLowerCase()));
   const contextual = CONTEXT_CUE.test(s) || levelWords.size >= 2;
-  const hasCitation = /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
+  const hasCitation = ctx.hasCitation ?? /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
   const resultSig = isResultSignificance(s);
 
   type Cand = RawStatement & { at: number };
@@ -199,11 +213,13 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
     cands.push({ kind: "threshold", statistic: "p_value", comparator: "<", value: v, framing: contextual ? "contextual" : "fixed", procedure: null, at: m.index! });
   }
 
+  if (!mentions.length || !nums.length) return finish(out, cands);
+  const lastByMention = new Map<Mention, { kind: "threshold" | "reported"; comparator: Comparator | null; end: number }>();
   for (let ni = 0; ni < nums.length; ni++) {
     const n = nums[ni];
     if (/^\s*(?:%\s*)?(?:power|cases|respondents|participants|observations|subjects|people)\b/i.test(s.slice(n.end, n.end + 20))) continue;
     const before = s.slice(0, n.start);
-    if (BLOCKER.test(before.slice(-24))) continue;
+    if (BLOCKER.test(before.slice(-24)) && !/1\s*[-−–]\s*β\s*=\s*$/.test(before)) continue;
     if (/\bp\s*[<=>≤≥]\s*$/i.test(before) || /\bat the\s*$/i.test(before)) continue;
     if (/^\s*[-–]?(?:point|item|year|day|week|month|hour|minute|factor|wave)s?\b/i.test(s.slice(n.end, n.end + 12))) continue;
     // the statistic this number belongs to: the nearest mention before it, within the sentence part
@@ -212,7 +228,7 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
     for (let i = mentions.length - 1; i >= 0; i--) if (mentions[i].end <= n.start) { mi = i; break; }
     if (mi < 0) continue;
     const mention = mentions[mi];
-    if (n.start - mention.end > 110) continue;
+    if (n.start - mention.end > 150) continue;
     // Several names joined by "and" / "," with no number between share the value ("CFI and TLI of .95").
     const group: Mention[] = [mention];
     for (let i = mi - 1; i >= 0; i--) {
@@ -240,11 +256,19 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
       if (after2) comparator = after2;
       const cutBefore = new RegExp(`${CUT_NOUN.source}\\s*(?:of|at|is|was|value of)?\\s*(?:the\\s*)?$`, "i").test(gap) || /\bthe\s*$/i.test(gap) && CUT_NOUN.test(after.slice(0, 25));
       const relationToCut = new RegExp(`^[^.;]{0,45}?\\b(?:above|below|exceed\\w*|under|over|higher than|lower than)\\s+the\\b[^.;]{0,30}${CUT_NOUN.source}`, "i").test(after);
-      const allValues = /\ball\b[^.;]*$/i.test(s.slice(Math.max(0, g.start - 40), n.start)) || /\bboth\b/i.test(gap);
+      const clauseStart = Math.max(0, s.lastIndexOf(";", g.start) + 1);
+      const allValues = /\ball\b/i.test(s.slice(clauseStart, n.start)) && !/\b(?:all|for all) (?:tests|analyses|hypothes[ie]s|models)\b/i.test(s) || /\bboth\b/i.test(gap);
       const onlyOneNumber = nums.filter((x) => x !== n).every((x) => BLOCKER.test(s.slice(0, x.start).slice(-24)));
 
       let kind: "threshold" | "reported";
-      if (key === "p_value") {
+      const prevSame = lastByMention.get(mention);
+      const listGap = prevSame ? s.slice(prevSame.end, n.start) : "";
+      const continuesList = prevSame && /^[\s,]*(?:(?:and|or|,)\s*)?(?:(?:for|in) [^,;.<>=\d]{1,40}?(?:,?\s*and|,)\s*)?(?:(?:it|this|the \w+) (?:was|were)\s*)?$/i.test(listGap) && !comparatorBefore(listGap);
+      if (/\b(?:ranged?|ranging|were between|was between|varied)\b[^;]*$/i.test(s.slice(g.end, n.start)) && !CUT_NOUN.test(s.slice(g.end, n.start)) || /\branged? (?:from|between)\b/i.test(s.slice(mention.end, n.start))) continue;
+      if (continuesList && prevSame) {
+        kind = prevSame.kind;
+        if (kind === "reported" || !comparator || comparator === "=") comparator = prevSame.comparator;
+      } else if (key === "p_value") {
         if (resultSig) continue;
         kind = "threshold";
       } else if (cutBefore) kind = "threshold";
@@ -277,7 +301,9 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
         if (!HIGHER_IS_WORSE.has(key) && repeated) continue;
         comparator = "<=";
       }
-      const dedupeKey = `${kind}:${key}:${value}`;
+      if (comparator === ">" && /\b(?:no|none of the|not one)\s*$/i.test(s.slice(0, g.start))) comparator = "<=";
+      lastByMention.set(mention, { kind, comparator, end: n.end });
+      const dedupeKey = `${kind}:${key}:${comparator}:${value}`;
       if (kind === "threshold" && usedValues.has(dedupeKey)) continue;
       usedValues.set(dedupeKey, 1);
       cands.push({
@@ -287,6 +313,10 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
       });
     }
   }
+  return finish(out, cands);
+}
+
+function finish(out: RawStatement[], cands: (RawStatement & { at: number })[]): RawStatement[] {
   cands.sort((a, b) => a.at - b.at);
   for (const c of cands) {
     const { at: _at, ...rest } = c;
