@@ -1,0 +1,71 @@
+import { z } from "zod";
+import { sql } from "kysely";
+import type { DB } from "@/db";
+import { STATISTIC_KEYS } from "@/lib/practices";
+
+const uuidList = z
+  .string()
+  .transform((s) => s.split(",").map((x) => x.trim()).filter(Boolean))
+  .pipe(z.array(z.uuid({ message: "venues must be a comma-separated list of venue ids" })).max(200));
+const year = z.coerce.number().int().min(1800).max(2100);
+
+/** Dashboard filters, as they sit in the URL (so links are shareable). */
+export const filtersSchema = z.object({
+  practice: z.uuid({ message: "practice must be a practice id" }).optional(),
+  venues: uuidList.optional(),
+  from: year.optional(),
+  to: year.optional(),
+  statistic: z.enum(STATISTIC_KEYS).optional(),
+  framing: z.enum(["fixed", "contextual"]).optional(),
+});
+export type Filters = z.infer<typeof filtersSchema>;
+
+export interface PracticeRef {
+  id: string;
+  key: string;
+  label: string;
+  statistic: string;
+}
+
+/**
+ * The practice a dashboard shows: the one asked for; else, for a statistic filter, that statistic's
+ * first practice; else the first seeded practice. A practice that contradicts the statistic filter
+ * gives way to the statistic, so changing the statistic in the UI never shows an empty mismatch.
+ */
+export async function pickPractice(db: DB, f: Filters): Promise<PracticeRef | null> {
+  if (f.practice) {
+    const p = await db.selectFrom("practices").select(["id", "key", "label", "statistic"]).where("id", "=", f.practice).executeTakeFirst();
+    if (p && (!f.statistic || p.statistic === f.statistic)) return p;
+  }
+  let q = db.selectFrom("practices").select(["id", "key", "label", "statistic"]);
+  if (f.statistic) q = q.where("statistic", "=", f.statistic);
+  return (await q.orderBy("is_seeded", "desc").orderBy("key").limit(1).executeTakeFirst()) ?? null;
+}
+
+/** The WHERE part shared by every fact view: venues, years and statement framing. */
+export function factWhere(f: Filters, alias = "") {
+  const c = (col: string) => sql.ref(alias ? `${alias}.${col}` : col);
+  return sql`${f.venues?.length ? sql`and ${c("venue_id")} = any(${f.venues}::uuid[])` : sql``}
+    ${f.from !== undefined ? sql`and ${c("year")} >= ${f.from}` : sql``}
+    ${f.to !== undefined ? sql`and ${c("year")} <= ${f.to}` : sql``}
+    ${f.framing ? sql`and ${c("framing")} = ${f.framing}` : sql``}`;
+}
+
+/** Venues and years only: the article counts have no framing. */
+export function countWhere(f: Filters) {
+  return sql`${f.venues?.length ? sql`and venue_id = any(${f.venues}::uuid[])` : sql``}
+    ${f.from !== undefined ? sql`and year >= ${f.from}` : sql``}
+    ${f.to !== undefined ? sql`and year <= ${f.to}` : sql``}`;
+}
+
+/** Back to URL form (for links between dashboards and the CSV link). */
+export function filtersToSearch(f: Filters): string {
+  const p = new URLSearchParams();
+  if (f.practice) p.set("practice", f.practice);
+  if (f.venues?.length) p.set("venues", f.venues.join(","));
+  if (f.from !== undefined) p.set("from", String(f.from));
+  if (f.to !== undefined) p.set("to", String(f.to));
+  if (f.statistic) p.set("statistic", f.statistic);
+  if (f.framing) p.set("framing", f.framing);
+  return p.toString();
+}
