@@ -113,7 +113,8 @@ export async function resolveArticleReferences(db: DB, articleId: string): Promi
 
 /**
  * Older articles that may cite this one: their references share its DOI or its surname + year block
- * and do not yet lead to a corpus article. Their resolution is re-run when this article arrives.
+ * and do not yet lead to a corpus article, or they cite the outside work this article just took
+ * over. Their resolution is re-run when this article arrives, and with it their trails.
  */
 export async function articlesThatMayCite(db: DB, articleId: string): Promise<string[]> {
   const a = await db.selectFrom("articles").select(["doi", "authors", "year"]).where("id", "=", articleId).executeTakeFirst();
@@ -122,8 +123,9 @@ export async function articlesThatMayCite(db: DB, articleId: string): Promise<st
   const surname = firstAuthorSurname(Array.isArray(a.authors) ? a.authors : []);
   const r = await sql<{ article_id: string }>`
     select distinct r.article_id from "references" r left join works w on w.id = r.work_id
-    where r.article_id <> ${articleId} and (w.article_id is null or w.id is null) and (
-      ${doi ? sql`lower(r.doi) = ${doi}` : sql`false`}
+    where r.article_id <> ${articleId} and (w.article_id = ${articleId} or w.article_id is null or w.id is null) and (
+      w.article_id = ${articleId}
+      or ${doi ? sql`lower(r.doi) = ${doi}` : sql`false`}
       or ${surname && a.year ? sql`(r.year like ${String(a.year) + "%"} and r.authors->>0 ilike ${"%" + surname + "%"})` : sql`false`})`.execute(db);
   return r.rows.map((x) => x.article_id);
 }

@@ -1,0 +1,150 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import Papa from "papaparse";
+import { createTestDatabase } from "@/tests/helpers/db";
+import type { DB } from "@/db";
+import { loadFixture } from "./fixture";
+import { seedPractices } from "@/lib/graph/seed";
+import { handleResolve, GRAPH_QUEUES, type GraphJobDeps } from "@/workers/graph-jobs";
+import { rebuildAllTrails } from "@/lib/graph/trails";
+import { refreshSummaries } from "@/lib/graph/summaries";
+import { recordSourceCheck } from "@/lib/graph/source-checks";
+import { dashboardCsv, dashboardData } from "@/lib/dashboards";
+import { statementTrailView } from "@/lib/dashboards/trail-view";
+import { mergeWorks, splitWork } from "@/lib/graph/works";
+
+// Every expected number below is a hand count over the fixture in ./fixture.ts (written out in the
+// comments), not a value read back from the code under test.
+let t: Awaited<ReturnType<typeof createTestDatabase>>;
+let db: DB;
+let ids: Awaited<ReturnType<typeof loadFixture>>;
+let alpha: string;
+const sent: { name: string; data: object }[] = [];
+
+beforeAll(async () => {
+  t = await createTestDatabase();
+  db = t.db;
+  await seedPractices(db);
+  ids = await loadFixture(db);
+  alpha = (await db.selectFrom("practices").select("id").where("key", "=", "cronbach_alpha-ge-0.7-fixed").executeTakeFirstOrThrow()).id;
+  const deps: GraphJobDeps = { db: () => db, send: async (name, data) => void sent.push({ name, data }) };
+  // Mining order M, A2, A1: A2 cites A1 before A1 is in the corpus.
+  for (const k of ["M", "A2", "A1", "A3", "A4", "A5", "A6"]) await handleResolve(deps, { articleId: ids.articles[k] });
+  // The re-checks the jobs asked for, as the worker would run them.
+  for (const s of sent.filter((x) => x.name === GRAPH_QUEUES.resolve)) await handleResolve(deps, s.data as { articleId: string; recheck: boolean });
+  const mWork = await db.selectFrom("works").select("id").where("article_id", "=", ids.articles.M).executeTakeFirstOrThrow();
+  await recordSourceCheck(db, { workId: mWork.id, practiceId: alpha, verdict: "says_so", page: "12", quote: "values of .80 or above", statedValue: 0.8, checkedBy: null });
+  await rebuildAllTrails(db);
+  await refreshSummaries(db);
+});
+afterAll(async () => t?.drop());
+
+describe("reference resolution over the fixture", () => {
+  it("resolves by DOI (case-insensitive) to the corpus article M", async () => {
+    const r = await db.selectFrom("references as r").innerJoin("works as w", "w.id", "r.work_id").select("w.article_id").where("r.article_id", "=", ids.articles.A1).executeTakeFirstOrThrow();
+    expect(r.article_id).toBe(ids.articles.M);
+  });
+  it("makes the two citations of the same invented book one work, typed methods source by its kind", async () => {
+    const books = await db.selectFrom("references").select("work_id").where("kind", "=", "book").execute();
+    expect(books).toHaveLength(2);
+    expect(books[0].work_id).not.toBeNull();
+    expect(books[0].work_id).toBe(books[1].work_id);
+    const w = await db.selectFrom("works").select(["work_type", "type_decided_by"]).where("id", "=", books[0].work_id!).executeTakeFirstOrThrow();
+    expect(w).toEqual({ work_type: "methods_source", type_decided_by: "reference_kind" });
+  });
+  it("re-runs for A2 when A1 arrives, and A2's reference now leads to A1", async () => {
+    expect(sent.some((s) => s.name === GRAPH_QUEUES.resolve && (s.data as { articleId: string }).articleId === ids.articles.A2)).toBe(true);
+    const r = await db.selectFrom("references as r").innerJoin("works as w", "w.id", "r.work_id").select("w.article_id").where("r.article_id", "=", ids.articles.A2).where("r.kind", "=", "article").executeTakeFirstOrThrow();
+    expect(r.article_id).toBe(ids.articles.A1);
+  });
+});
+
+describe("trails", () => {
+  it("ends where the hand-traced chains end", async () => {
+    const rows = await db.selectFrom("trails").select(["statement_id", "end_kind", "length", "supported"]).where("practice_id", "=", alpha).execute();
+    const by = Object.fromEntries(rows.map((r) => [r.statement_id, r]));
+    // M → book (methods source); A1 → M (methods venue); A2 → A1 (asserts) → M; A3 cites nothing.
+    expect(by[ids.statements["M.0"]]).toMatchObject({ end_kind: "methods_source", length: 1 });
+    expect(by[ids.statements["A1.0"]]).toMatchObject({ end_kind: "methods_source", length: 1, supported: "says_so" });
+    expect(by[ids.statements["A2.0"]]).toMatchObject({ end_kind: "methods_source", length: 2, supported: "says_so" });
+    expect(by[ids.statements["A3.0"]]).toMatchObject({ end_kind: "no_citation", length: 0 });
+  });
+  it("shows one statement's trail as a graph with the locator on the edge and links to the sentence", async () => {
+    const v = await statementTrailView(db, ids.statements["A2.0"], alpha);
+    expect(v).not.toBeNull();
+    const hrefs = v!.nodes.map((n) => n.href);
+    expect(hrefs).toContain(`/articles/${ids.articles.A2}#statement-${ids.statements["A2.0"]}`);
+    expect(hrefs).toContain(`/articles/${ids.articles.A1}#statement-${ids.statements["A1.0"]}`);
+    expect(v!.edges.filter((e) => e.kind === "cites").map((e) => e.locator).sort()).toEqual([null, "p. 12"]);
+  });
+});
+
+describe("dashboards equal a hand count", () => {
+  it("practice over time: eligible articles per year and the asserting ones by sourcing", async () => {
+    const d = await dashboardData(db, "practice-over-time", { practice: alpha });
+    // 2010: M (1 article, asserts, cited no locator). 2018: A1 (A5 failed, not eligible).
+    // 2019: A2, A3, A4 (A6 has no licence): A2 no locator, A3 unsourced.
+    const rows = d.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting, r.cited_with_locator, r.cited_no_locator, r.secondary_only, r.unsourced]);
+    expect(rows).toEqual([
+      [2010, 1, 1, 0, 1, 0, 0],
+      [2018, 1, 1, 1, 0, 0, 0],
+      [2019, 3, 2, 0, 1, 0, 1],
+    ]);
+    expect(d.tables.byYear.rows[2].share).toBeCloseTo(2 / 3, 4);
+    expect(d.notes[0]).toMatch(/Cochran–Armitage/);
+  });
+  it("filters by venue and years", async () => {
+    const d = await dashboardData(db, "practice-over-time", { practice: alpha, venues: [ids.venues.methods], from: 2011 });
+    // Methods venue from 2011 on: A4 only (2019), asserting nothing.
+    expect(d.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting])).toEqual([[2019, 1, 0]]);
+  });
+  it("trail ends, lengths and most cited sources", async () => {
+    const d = await dashboardData(db, "trail-ends", { practice: alpha });
+    expect(d.tables.ends.rows.map((r) => [r.year, r.statements, r.methods_source, r.no_citation])).toEqual([
+      [2010, 1, 1, 0],
+      [2018, 1, 1, 0],
+      [2019, 2, 1, 1],
+    ]);
+    // Lengths: A3 0; M 1; A1 1; A2 2.
+    expect(d.tables.lengths.rows).toEqual([{ length: 0, statements: 1 }, { length: 1, statements: 2 }, { length: 2, statements: 1 }]);
+    // Three works cited once each (book by M; M by A1 with "p. 12"; A1 by A2): locator rate 1 of 3 overall.
+    expect(d.tables.sources.rows).toHaveLength(3);
+    expect(d.tables.sources.rows.reduce((s, r) => s + Number(r.with_locator), 0)).toBe(1);
+  });
+  it("venue comparison with in-venue precedent", async () => {
+    const d = await dashboardData(db, "venues", { practice: alpha });
+    const by = Object.fromEntries(d.tables.venues.rows.map((r) => [r.venue_id, r]));
+    // Methods venue: M, A4 eligible; M asserts; M cites an outside book. Applied: A1, A2, A3 all
+    // assert; citations A1→M (other venue) and A2→A1 (same venue).
+    expect(by[ids.venues.methods]).toMatchObject({ articles: 2, asserting: 1, citations: 1, in_venue: 0 });
+    expect(by[ids.venues.applied]).toMatchObject({ articles: 3, asserting: 3, citations: 2, in_venue: 1, in_venue_share: 0.5 });
+    expect(by[ids.venues.applied].rate_vs_rest).toBeCloseTo(1 - 0.5, 4);
+  });
+  it("drift lists A1, whose .70 differs from the .80 its checked source states", async () => {
+    const d = await dashboardData(db, "drift", { practice: alpha });
+    expect(d.tables.drift.rows.map((r) => r.statement_id)).toEqual([ids.statements["A1.0"]]);
+  });
+  it("each CSV is exactly the JSON table", async () => {
+    for (const name of ["practice-over-time", "trail-ends", "venues", "drift", "trail-graph"] as const) {
+      const d = await dashboardData(db, name, { practice: alpha });
+      for (const [table, t] of Object.entries(d.tables)) {
+        const parsed = Papa.parse<string[]>(dashboardCsv(d, table).body.trim(), { skipEmptyLines: false });
+        expect(parsed.data[0]).toEqual(t.columns);
+        expect(parsed.data.slice(1)).toEqual(t.rows.map((r) => t.columns.map((c) => (r[c] === null || r[c] === undefined ? "" : String(r[c])))));
+      }
+    }
+  });
+});
+
+describe("curator merge and split", () => {
+  it("merging moves references and the graph follows; splitting undoes it", async () => {
+    const a = await db.insertInto("works").values({ doi: null, title: "Invented duplicate", normalised_title: null, first_author: "x", year: "2001", article_id: null, merged_into: null }).returning("id").executeTakeFirstOrThrow();
+    const bookRefs = await db.selectFrom("references").select(["id", "work_id"]).where("kind", "=", "book").orderBy("id").execute();
+    await splitWork(db, bookRefs[0].work_id!, [bookRefs[0].id]);
+    const after = await db.selectFrom("references").select("work_id").where("id", "=", bookRefs[0].id).executeTakeFirstOrThrow();
+    expect(after.work_id).not.toBe(bookRefs[1].work_id);
+    await mergeWorks(db, after.work_id!, bookRefs[1].work_id!);
+    const back = await db.selectFrom("references").select("work_id").where("kind", "=", "book").execute();
+    expect(new Set(back.map((r) => r.work_id)).size).toBe(1);
+    await expect(mergeWorks(db, a.id, a.id)).rejects.toThrow(/different/);
+  });
+});
