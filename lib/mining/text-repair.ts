@@ -6,18 +6,34 @@ export function fixLigatures(text: string): string {
   return text.replace(/[ﬀ-ﬆ]/g, (c) => LIGATURES[c] ?? c);
 }
 
-// Prefixes that keep their hyphen when a line breaks after them ("self-\nreport" stays "self-report").
-const KEEP_HYPHEN_PREFIX = /(?:^|[^\p{L}])(self|non|co|cross|item|well|multi|semi|quasi|pre|post|re|anti|inter|intra|two|one|three|four|five|six|seven|eight|nine|ten|first|second|third|high|low|long|short|full|part|test|follow|sub|meta|socio|web|time|long|large|small)-$/iu;
+// Prefixes that usually form real compounds ("self-report", "item-total", "two-factor"): when a line
+// breaks after one of them the hyphen is kept, unless the document itself spells the joined word.
+const KEEP_HYPHEN_PREFIX = /(?:^|[^\p{L}])(self|non|cross|item|well|quasi|semi|multi|two|one|three|four|five|six|seven|eight|nine|ten|first|second|third|test|follow|early|late|long|short|high|low)-$/iu;
 
 /**
- * Join words broken at line ends. "relia-\nbility" → "reliability"; a hyphen after a known prefix or
- * before a capital or a digit is a real hyphen ("item-\ntotal" → "item-total", "Kaiser-\nMeyer").
+ * Join words broken at line ends. "relia-\nbility" → "reliability"; a hyphen before a capital or a
+ * digit, or after a compound-forming prefix, is a real hyphen ("item-\ntotal" → "item-total",
+ * "Kaiser-\nMeyer"). The document's own vocabulary decides first: if it writes "item-total" elsewhere
+ * the hyphen stays, if it writes "comprises" elsewhere the parts are joined.
  */
-export function joinHyphenated(text: string): string {
+export function joinHyphenated(text: string, vocabulary: Set<string> = new Set()): string {
   return text.replace(/([\p{L}]+)-[ \t]*\n[ \t]*([\p{L}\d]+)/gu, (m, a: string, b: string) => {
+    const joined = `${a}${b}`.toLowerCase();
+    const hyphened = `${a}-${b}`.toLowerCase();
+    if (vocabulary.has(hyphened)) return `${a}-${b}`;
+    if (vocabulary.has(joined)) return `${a}${b}`;
     if (/^[\p{Lu}\d]/u.test(b) || KEEP_HYPHEN_PREFIX.test(`${a}-`)) return `${a}-${b}`;
     return `${a}${b}`;
   });
+}
+
+function vocabularyOf(pages: string[]): Set<string> {
+  const v = new Set<string>();
+  for (const p of pages) {
+    // words not broken at a line end
+    for (const m of p.matchAll(/(?<![\p{L}-])[\p{L}]+(?:-[\p{L}]+)*(?![\p{L}]|-\s*\n)/gu)) v.add(m[0].toLowerCase());
+  }
+  return v;
 }
 
 /** Remove lines repeated at the top or bottom of most pages (running heads, footers) and bare page numbers. */
@@ -47,5 +63,7 @@ export function removeRunningLines(pages: string[]): string[] {
 }
 
 export function repairPages(pages: string[]): string[] {
-  return removeRunningLines(pages.map((p) => fixLigatures(p.replace(/\r\n?/g, "\n")))).map(joinHyphenated);
+  const cleaned = removeRunningLines(pages.map((p) => fixLigatures(p.replace(/\r\n?/g, "\n"))));
+  const vocabulary = vocabularyOf(cleaned);
+  return cleaned.map((p) => joinHyphenated(p, vocabulary));
 }
