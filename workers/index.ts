@@ -1,0 +1,54 @@
+/**
+ * The worker process (`npm run worker`; `npm start` runs one too). Any number of them may run
+ * against one database. SIGTERM/SIGINT stop taking new jobs and wait for the ones in progress.
+ */
+import type { Job } from "pg-boss";
+import { createDb, defaultDatabaseUrl } from "@/db";
+import { getStorage } from "@/lib/storage";
+import { createMiner } from "@/lib/mining";
+import { ensureMiningQueue, MINING_QUEUE } from "@/lib/corpus/queue";
+import { createWorkerBoss, ensureQueue } from "./boss";
+import { buildJobs } from "./jobs";
+
+const url = defaultDatabaseUrl();
+const db = createDb(url, 4);
+const boss = createWorkerBoss(url);
+await boss.start();
+
+const { mining, all } = buildJobs({
+  db,
+  storage: getStorage(),
+  boss,
+  createMiner: ({ procedures }) => createMiner({ procedures }),
+  onMined: process.env.ECHOLINE_WORKER_TIMINGS === "1" ? (t) => console.log(`[timing] ${JSON.stringify(t)}`) : undefined,
+});
+
+await ensureMiningQueue(boss);
+for (const job of all) {
+  if (job.name !== MINING_QUEUE) await ensureQueue(boss, job);
+  await boss.work(job.name, { localConcurrency: job.concurrency ?? 1, pollingIntervalSeconds: 1 }, async (jobs: Job<object>[]) => {
+    await job.handler(jobs);
+  });
+  if (job.cron) await boss.schedule(job.name, job.cron, null, { ...job.preset });
+}
+console.log(`[worker] ready (pid ${process.pid}): ${all.map((j) => j.name).join(", ")}`);
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  console.log(`[worker] ${signal}: finishing work in progress …`);
+  try {
+    await boss.stop({ graceful: true, timeout: 60_000 });
+    await mining.close();
+    await db.destroy();
+  } catch (err) {
+    console.error("[worker] error while stopping:", (err as Error).message);
+  }
+  console.log("[worker] stopped");
+  process.exit(0);
+}
+process.on("SIGTERM", () => void shutdown("SIGTERM"));
+process.on("SIGINT", () => void shutdown("SIGINT"));
+// A stray rejection in one job is logged, never the end of the process.
+process.on("unhandledRejection", (err) => console.error("[worker] unhandled rejection:", err));

@@ -1,0 +1,204 @@
+/**
+ * The mining job: read one article's stored file, run the miner, store what the contract schema
+ * accepted in one transaction. Bad input is a finished job with a `failed` article and its reason;
+ * only trouble on our side (database, storage) is retried, and the last try marks the article failed.
+ */
+import { sql, type Transaction } from "kysely";
+import type { Job, PgBoss } from "pg-boss";
+import { z } from "zod";
+import type { Database, DB } from "@/db";
+import type { FileStorage } from "@/lib/storage";
+import { SuccessLine, ErrorLine } from "@/lib/mining/contract";
+import type { ProcedurePattern } from "@/lib/mining/procedures";
+import { MINING_QUEUE, type MiningJobData } from "@/lib/corpus/queue";
+import { recordEvent } from "@/lib/corpus/events";
+import { replaceMinedRows } from "@/lib/corpus/store-mined";
+import { enabledProcedures } from "@/lib/corpus/procedures-store";
+import { documentMetaUpdate } from "@/lib/metadata/document";
+import { onArticleMined } from "./graph-jobs";
+import { RETRY, type JobDefinition } from "./job-types";
+
+/** What the worker needs of the extractor (lib/mining's createMiner returns this). */
+export type MinerLike = {
+  mine(input: { data: Uint8Array; filename: string }): Promise<{ line: unknown; timings?: { readMs: number; mineMs: number }; meta?: unknown }>;
+  close(): Promise<void> | void;
+};
+export type MinerFactory = (opts: { procedures: ProcedurePattern[] }) => MinerLike;
+
+export type MiningDeps = {
+  db: DB;
+  storage: FileStorage;
+  boss: PgBoss;
+  createMiner: MinerFactory;
+  /** Called after the rows are written and before commit; tests inject a failure here. */
+  beforeCommit?: (trx: Transaction<Database>, articleId: string) => Promise<void>;
+  log?: Pick<Console, "info" | "error" | "warn">;
+  /** Timings per mined article, for the benchmark. */
+  onMined?: (t: { articleId: string; pages: number; readMs: number; mineMs: number; storeMs: number }) => void;
+};
+
+export type MiningJob = JobDefinition<MiningJobData> & {
+  /** Mines one article; resolves when it is done or failed, rejects only for a retryable error. */
+  run(articleId: string, retryCount?: number): Promise<"done" | "failed" | "missing">;
+  close(): Promise<void>;
+};
+
+class Retryable extends Error {}
+
+export function createMiningJob(deps: MiningDeps): MiningJob {
+  const log = deps.log ?? console;
+  const { db } = deps;
+  // One warm miner per process, rebuilt only when curators change the enabled procedure list.
+  let miner: { key: string; miner: MinerLike } | null = null;
+  async function currentMiner(): Promise<MinerLike> {
+    const procedures = await enabledProcedures(db);
+    const key = JSON.stringify(procedures);
+    if (!miner || miner.key !== key) {
+      const old = miner;
+      miner = { key, miner: deps.createMiner({ procedures }) };
+      if (old) await old.miner.close();
+    }
+    return miner.miner;
+  }
+
+  async function setStatus(articleId: string, status: "reading" | "mining" | "queued", message: string | null = null) {
+    await db.transaction().execute(async (trx) => {
+      await trx.updateTable("articles").set({ status, updated_at: sql`now()` }).where("id", "=", articleId).execute();
+      await recordEvent(trx, articleId, status === "queued" ? "retry" : status, message);
+    });
+  }
+
+  async function fail(articleId: string, code: string, message: string) {
+    // A failed article has no mined rows: a re-mine that fails must not leave the old run behind.
+    await db.transaction().execute(async (trx) => {
+      await trx.deleteFrom("statements").where("article_id", "=", articleId).execute();
+      await trx.deleteFrom("citations").where("article_id", "=", articleId).execute();
+      await trx.deleteFrom("references").where("article_id", "=", articleId).execute();
+      await trx
+        .updateTable("articles")
+        .set({ status: "failed", failure_code: code, failure_message: message, updated_at: sql`now()` })
+        .where("id", "=", articleId)
+        .execute();
+      await recordEvent(trx, articleId, "failed", `${code}: ${message}`);
+    });
+  }
+
+  async function run(articleId: string): Promise<"done" | "failed" | "missing"> {
+    const article = await db
+      .selectFrom("articles")
+      .innerJoin("stored_files", "stored_files.sha256", "articles.file_sha256")
+      .select(["articles.id", "articles.original_filename", "stored_files.storage_key"])
+      .where("articles.id", "=", articleId)
+      .executeTakeFirst();
+    if (!article) return "missing";
+    await setStatus(articleId, "reading");
+    let data: Uint8Array;
+    try {
+      data = await deps.storage.get(article.storage_key);
+    } catch (err) {
+      throw new Retryable(`The stored file could not be read: ${(err as Error).message}`);
+    }
+    const m = await currentMiner();
+    let result: Awaited<ReturnType<MinerLike["mine"]>>;
+    try {
+      result = await m.mine({ data, filename: article.original_filename });
+    } catch (err) {
+      // The miner is meant to turn every bad input into an error line; if it throws instead, the
+      // same bytes would throw again, so retrying is pointless.
+      log.error(`[mining] miner threw on article ${articleId}:`, err);
+      await fail(articleId, "internal", `The miner stopped on this file (${(err as Error).message ?? "unknown error"}). The error was logged.`);
+      return "failed";
+    }
+    const asError = ErrorLine.safeParse(result.line);
+    if (asError.success) {
+      await fail(articleId, asError.data.error.code, asError.data.error.message);
+      return "failed";
+    }
+    const parsed = SuccessLine.safeParse(result.line);
+    if (!parsed.success) {
+      const issue = parsed.error.issues[0];
+      log.error(`[mining] contract violation on article ${articleId}:`, issue);
+      await fail(articleId, "internal", `The miner's output did not match the mining contract (${issue?.path.join(".")}: ${issue?.message}).`);
+      return "failed";
+    }
+    const line = parsed.data;
+    await setStatus(articleId, "mining");
+    const t0 = performance.now();
+    await db.transaction().execute(async (trx) => {
+      // Serialises two workers that got two jobs for the same article (a re-mine during a mine).
+      const locked = await trx.selectFrom("articles").select(["id", "title", "authors", "year", "doi", "licence", "venue_id"]).where("id", "=", articleId).forUpdate().executeTakeFirst();
+      if (!locked) return;
+      await replaceMinedRows(trx, articleId, line);
+      const metaUpdate = await documentMetaUpdate(trx, locked, result.meta);
+      await trx
+        .updateTable("articles")
+        .set({
+          ...metaUpdate,
+          status: "done",
+          pages: line.pages,
+          failure_code: null,
+          failure_message: null,
+          mined_at: sql`now()`,
+          miner_version: process.env.ECHOLINE_MINER_VERSION ?? "1",
+          updated_at: sql`now()`,
+        })
+        .where("id", "=", articleId)
+        .execute();
+      await recordEvent(trx, articleId, "done", `${line.statements.length} statements, ${line.citations.length} citations, ${line.references.length} references from ${line.pages} pages.`);
+      await onArticleMined(deps.boss, trx, articleId);
+      if (deps.beforeCommit) await deps.beforeCommit(trx, articleId);
+    });
+    deps.onMined?.({ articleId, pages: line.pages, readMs: result.timings?.readMs ?? 0, mineMs: result.timings?.mineMs ?? 0, storeMs: performance.now() - t0 });
+    return "done";
+  }
+
+  const limit = RETRY.mining.retryLimit;
+  async function handleOne(job: Job<MiningJobData>) {
+    const parsed = z.object({ articleId: z.string().uuid() }).safeParse(job.data);
+    if (!parsed.success) {
+      log.error(`[mining] job ${job.id} has no valid articleId; dropped.`);
+      return;
+    }
+    const { articleId } = parsed.data;
+    try {
+      const r = await run(articleId);
+      if (r === "missing") log.warn(`[mining] article ${articleId} no longer exists; job ${job.id} dropped.`);
+    } catch (err) {
+      const message = (err as Error).message ?? String(err);
+      log.error(`[mining] article ${articleId}, try ${job.retryCount + 1} of ${limit + 1}:`, message);
+      try {
+        if (job.retryCount >= limit) {
+          await fail(articleId, "internal", `Mining failed after ${limit + 1} tries: ${message}`);
+          return;
+        }
+        await setStatus(articleId, "queued", `Try ${job.retryCount + 1} failed (${message}); retrying.`);
+      } catch (inner) {
+        log.error(`[mining] could not record the failure of ${articleId}:`, (inner as Error).message);
+      }
+      throw err;
+    }
+  }
+
+  return {
+    name: MINING_QUEUE,
+    preset: RETRY.mining,
+    concurrency: Number(process.env.ECHOLINE_MINING_CONCURRENCY ?? 1),
+    // pg-boss hands a batch; each article is its own unit, so one bad article never fails the others.
+    handler: async (jobs) => {
+      const errors: unknown[] = [];
+      for (const job of jobs) {
+        try {
+          await handleOne(job);
+        } catch (err) {
+          errors.push(err);
+        }
+      }
+      if (errors.length) throw errors[0];
+    },
+    run: async (articleId) => run(articleId),
+    close: async () => {
+      if (miner) await miner.miner.close();
+      miner = null;
+    },
+  };
+}
