@@ -6,6 +6,8 @@ const nextConfig = {
   experimental: {
     // Uploads go through route handlers, which read the body themselves and enforce their own limit.
     serverActions: { bodySizeLimit: "1mb" },
+    // forbidden() gives a real 403 page for a signed-in person without the permission.
+    authInterrupts: true,
   },
 };
 export default nextConfig;

@@ -51,6 +51,15 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
   adapter: adapter(),
   session: { strategy: "jwt", maxAge: 8 * 60 * 60 },
   trustHost: true,
+  logger: {
+    // Wrong passwords, refused sign-ins and requests without a CSRF token are expected traffic:
+    // one line each, no stack trace. Anything else is logged in full.
+    error(error) {
+      const name = (error as { type?: string }).type ?? error.name;
+      if (["CredentialsSignin", "MissingCSRF", "AccessDenied", "Verification"].includes(name)) console.warn(`[auth] ${name}`);
+      else console.error("[auth]", error);
+    },
+  },
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in/problem" },
   providers: [
     Nodemailer({

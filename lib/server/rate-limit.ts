@@ -5,7 +5,6 @@ import { getDb } from "@/db";
 export const LIMITS = { windowMinutes: 15, perEmail: 5, perIp: 30 };
 
 export async function checkRateLimit(email: string, ip: string): Promise<boolean> {
-  const since = sql<Date>`now() - make_interval(mins => ${LIMITS.windowMinutes})`;
   const r = await getDb()
     .selectFrom("sign_in_attempts")
     .select([
@@ -13,7 +12,7 @@ export async function checkRateLimit(email: string, ip: string): Promise<boolean
       sql<number>`count(*) filter (where ip = ${ip})`.as("by_ip"),
     ])
     .where("succeeded", "=", false)
-    .where("at", ">", since)
+    .where(sql<boolean>`at > now() - make_interval(mins => ${LIMITS.windowMinutes})`)
     .where((eb) => eb.or([eb("key", "=", email), eb("ip", "=", ip)]))
     .executeTakeFirstOrThrow();
   return Number(r.by_email) < LIMITS.perEmail && Number(r.by_ip) < LIMITS.perIp;

@@ -106,3 +106,19 @@ export async function readLimited(req: Request, maxBytes: number): Promise<Uint8
   }
   return out;
 }
+
+/** For the few handlers anonymous visitors may call (accepting an invitation). */
+export function publicRoute<B extends z.ZodType>(
+  opts: { body: B; maxBytes?: number },
+  fn: (ctx: { body: z.infer<B>; req: NextRequest }) => Promise<Response | unknown>,
+) {
+  return async (req: NextRequest) => {
+    try {
+      const body = parse(opts.body, await readJson(req, opts.maxBytes ?? DEFAULT_BODY_LIMIT));
+      const out = await fn({ body, req });
+      return out instanceof Response ? out : NextResponse.json(out ?? { ok: true });
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}

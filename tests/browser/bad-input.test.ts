@@ -1,0 +1,81 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { spawn, type ChildProcess } from "node:child_process";
+import { APP_URL } from "../helpers/browser";
+import { sessionCookie } from "../helpers/http";
+import { stackEnv, waitForHttp } from "@/workers/stack";
+import { DATA_DIR } from "@/db/cluster";
+import path from "node:path";
+
+let admin: string;
+beforeAll(async () => {
+  admin = await sessionCookie("admin");
+});
+
+const post = (url: string, body: string, cookie = admin, extra: Record<string, string> = {}) =>
+  fetch(`${APP_URL}${url}`, { method: "POST", headers: { cookie, "content-type": "application/json", ...extra }, body });
+
+describe("bad input gets a clear JSON error that names the field", () => {
+  it("malformed JSON → 400 naming the body", async () => {
+    const r = await post("/api/admin/venues", "{not json");
+    expect(r.status).toBe(400);
+    expect(await r.json()).toEqual({ error: { code: "invalid", message: expect.stringMatching(/not valid JSON/), field: "body" } });
+  });
+
+  it("a wrong field → 400 naming that field", async () => {
+    const r = await post("/api/admin/venues", JSON.stringify({ name: "Ok Name", issn: "12-34" }));
+    expect(r.status).toBe(400);
+    const j = (await r.json()) as { error: { field: string; message: string } };
+    expect(j.error.field).toBe("issn");
+    expect(j.error.message).toMatch(/ISSN/);
+  });
+
+  it("a unique violation → 409 on the field, found by PostgreSQL's error code", async () => {
+    const body = JSON.stringify({ name: "Duplicate Test Venue", isMethodsVenue: false });
+    expect((await post("/api/admin/venues", body)).status).toBe(200);
+    const r = await post("/api/admin/venues", body);
+    expect(r.status).toBe(409);
+    expect(await r.json()).toMatchObject({ error: { code: "exists", field: "name" } });
+  });
+  it("an oversized body → 413, also when Content-Length is not sent", async () => {
+    const big = JSON.stringify({ name: "x".repeat(300 * 1024) });
+    const r = await post("/api/admin/venues", big);
+    expect(r.status).toBe(413);
+    expect(await r.json()).toMatchObject({ error: { code: "too_large", field: "body" } });
+    // A streamed body has no Content-Length: the limit must still hold while reading.
+    const stream = new ReadableStream({
+      start(c) {
+        for (let i = 0; i < 40; i++) c.enqueue(new TextEncoder().encode("x".repeat(10 * 1024)));
+        c.close();
+      },
+    });
+    const r2 = await fetch(`${APP_URL}/api/admin/venues`, { method: "POST", headers: { cookie: admin, "content-type": "application/json" }, body: stream, duplex: "half" } as RequestInit);
+    expect(r2.status).toBe(413);
+  });
+});
+
+describe("the database being down", () => {
+  let web: ChildProcess;
+  const port = 3199;
+  beforeAll(async () => {
+    // The same build, pointed at a port where no PostgreSQL listens.
+    const env = stackEnv({ appPort: port, smtpPort: 2625, mailHttpPort: 2626, databaseUrl: "postgres://postgres@127.0.0.1:1/none", dataDir: path.join(DATA_DIR, "e2e") });
+    web = spawn("node_modules/.bin/next", ["start", "-H", "127.0.0.1", "-p", String(port)], { env, stdio: "ignore" });
+    await waitForHttp(`http://127.0.0.1:${port}/`, 60_000);
+  });
+  afterAll(() => {
+    web?.kill("SIGTERM");
+  });
+
+  it("gives a clear page and a clear JSON error, no stack trace", async () => {
+    const cookie = admin.replace(/localhost:3100/g, `localhost:${port}`);
+    const page = await fetch(`http://localhost:${port}/home`, { headers: { cookie }, redirect: "manual" });
+    const html = await page.text();
+    expect(html).toMatch(/database (is not reachable|may be down)/i);
+    expect(html).not.toMatch(/ECONNREFUSED|at .*\.js:\d+/);
+    const api = await fetch(`http://localhost:${port}/api/venues`, { headers: { cookie } });
+    expect(api.status).toBe(503);
+    const j = (await api.json()) as { error: { code: string; message: string } };
+    expect(j.error.code).toBe("database_unavailable");
+    expect(JSON.stringify(j)).not.toMatch(/ECONNREFUSED|127\.0\.0\.1:1/);
+  });
+});

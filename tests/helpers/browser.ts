@@ -1,0 +1,59 @@
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { DEMO_ACCOUNTS } from "@/db/seed";
+import type { Role } from "@/db/schema/accounts";
+
+export const APP_URL = "http://localhost:3100";
+export const MAIL_URL = "http://127.0.0.1:2626";
+export const E2E_DATABASE_URL = "postgres://postgres@127.0.0.1:54321/echoline_e2e";
+
+// Launch flags for Debian's Chromium on this closed network (no background connections).
+const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+
+export async function launchBrowser(): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), "echoline-chromium-"));
+  const context = await chromium.launchPersistentContext(dir, { executablePath: "/usr/bin/chromium", args: ARGS, viewport: { width: 1280, height: 900 } });
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    close: async () => {
+      await context.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export function demoAccount(role: Role) {
+  const a = DEMO_ACCOUNTS.find((x) => x.role === role);
+  if (!a) throw new Error(`no demo account for ${role}`);
+  return a;
+}
+
+/** Signs in through the real sign-in form and waits for the home page. */
+export async function signInAs(page: Page, role: Role): Promise<void> {
+  const a = demoAccount(role);
+  await page.context().clearCookies();
+  await page.goto(`${APP_URL}/sign-in`);
+  await page.getByLabel("E-mail", { exact: true }).fill(a.email);
+  await page.getByLabel("Password", { exact: true }).fill(a.password);
+  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await page.waitForURL(`${APP_URL}/home`);
+}
+
+export type Mail = { id: string; to: string[]; subject: string; text: string };
+
+/** Waits until the mail fake holds a message for `to` newer than `after` (polls its API; no sleeps as proxies). */
+export async function waitForMail(to: string, after: number, timeoutMs = 20_000): Promise<Mail> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const r = await fetch(`${MAIL_URL}/messages?to=${encodeURIComponent(to)}`);
+    const list = (await r.json()) as (Mail & { at: string })[];
+    const m = list.find((x) => Date.parse(x.at) >= after);
+    if (m) return m;
+    await new Promise((res) => setTimeout(res, 200));
+  }
+  throw new Error(`no mail for ${to} within ${timeoutMs} ms`);
+}
