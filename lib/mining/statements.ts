@@ -201,7 +201,7 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
   }
 
   const pCut = /\bp\s*(<|≤|<=|=)\s*(0?\.\d+)/gi;
-  const pThresholdSentence = /consider|regard|deem|treat|as (?:marginally )?significant|set at|used as|adopted/i.test(s);
+  const pThresholdSentence = /\b(?:consider|regard|deem|treat)\w*|\bas (?:marginally )?significant\b|\bset at\b|\bused as\b|\badopted\b/i.test(s);
   for (const m of s.matchAll(pCut)) {
     if (!pThresholdSentence) continue;
     cands.push({ kind: "threshold", statistic: "p_value", comparator: m[1] === "≤" || m[1] === "<=" ? "<=" : "<", value: Number(m[2]), framing: contextual ? "contextual" : "fixed", procedure: null, at: m.index! });
@@ -226,7 +226,12 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
     // that has no other number-bearing mention in between.
     let mi = -1;
     for (let i = mentions.length - 1; i >= 0; i--) if (mentions[i].end <= n.start) { mi = i; break; }
-    if (mi < 0) continue;
+    if (mi < 0) {
+      // "Values above .70 are considered acceptable for Cronbach's alpha": the name comes after the value.
+      const next = mentions.findIndex((m) => m.start >= n.end && m.start - n.end < 80);
+      if (next < 0 || !sentenceThreshold || mentions.slice(0, next).length) continue;
+      mi = next;
+    }
     const mention = mentions[mi];
     if (n.start - mention.end > 150) continue;
     // Several names joined by "and" / "," with no number between share the value ("CFI and TLI of .95").
@@ -237,7 +242,7 @@ export function extractStatements(sentence: string, matchProcedure: (s: string) 
       else break;
     }
     const prevNum = nums[ni - 1];
-    const gapStart = Math.max(mention.end, prevNum && prevNum.end > mention.end ? prevNum.end : mention.end);
+    const gapStart = mention.end > n.start ? (prevNum ? prevNum.end : 0) : Math.max(mention.end, prevNum && prevNum.end > mention.end ? prevNum.end : mention.end);
     const gap = s.slice(gapStart, n.start);
     const after = s.slice(n.end, n.end + 60);
 

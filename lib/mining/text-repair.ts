@@ -55,7 +55,8 @@ export function removeRunningLines(pages: string[]): string[] {
         const t = l.trim();
         if (!t) return true;
         if (edgeIdx.has(i) && /^(?:page\s+)?\d{1,4}(?:\s*(?:of|\/)\s*\d{1,4})?$/i.test(t)) return false;
-        if (edgeIdx.has(i) && pages.length >= 2 && (edgeCount.get(norm(l)) ?? 0) >= minPages && t.length < 160) return false;
+        // Short pages (a title page, a table) have no body to tell running lines from.
+        if (edgeIdx.has(i) && nonEmptyIdx.length >= 6 && pages.length >= 2 && (edgeCount.get(norm(l)) ?? 0) >= minPages && t.length < 160) return false;
         return true;
       })
       .join("\n");
