@@ -6,6 +6,8 @@ import { sql } from "kysely";
 import { createDb, type DB } from "./index";
 import type { Role } from "./schema/accounts";
 import { hashPassword } from "@/lib/server/passwords";
+import { seedProcedures } from "@/lib/corpus/procedures-store";
+import { seedPractices } from "@/lib/graph/seed";
 
 export const DEMO_ACCOUNTS: { email: string; name: string; role: Role; password: string }[] = [
   { email: "admin@echoline.local", name: "Demo Admin", role: "admin", password: "admin-demo-pass" },
@@ -53,13 +55,15 @@ export async function seedVenues(db: DB): Promise<void> {
 export async function seedAll(db: DB): Promise<void> {
   await seedAccounts(db);
   await seedVenues(db);
+  await seedProcedures(db);
+  await seedPractices(db);
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
   const db = createDb();
   try {
     await seedAll(db);
-    console.log("[db] seeded demo accounts and venues");
+    console.log("[db] seeded demo accounts, venues, procedures and practices");
   } finally {
     await db.destroy();
   }
