@@ -1,0 +1,36 @@
+import Link from "next/link";
+import { sql } from "kysely";
+import { requirePage } from "@/lib/server/session";
+import { can } from "@/lib/auth/permissions";
+import { getDb } from "@/db";
+import { PracticeForm } from "@/components/practices/practice-form";
+import { EmptyState } from "@/components/ui/empty-state";
+
+export default async function PracticesPage() {
+  const actor = await requirePage("corpus:read");
+  const rows = await getDb()
+    .selectFrom("practices as p")
+    .leftJoin("statement_practices as sp", "sp.practice_id", "p.id")
+    .select(["p.id", "p.label", "p.is_seeded", sql<number>`count(sp.statement_id)::int`.as("statements")])
+    .groupBy("p.id")
+    .orderBy("p.label")
+    .execute();
+  return (
+    <main className="mx-auto max-w-5xl space-y-4 p-6">
+      <h1 className="text-2xl font-semibold">Practices</h1>
+      <p className="text-sm text-ink-2">A practice is a cut-off as authors assert it. Tracking one reports how it is used and sourced; it does not endorse it.</p>
+      {can(actor, "practices:manage") && <PracticeForm />}
+      {rows.length === 0 ? <EmptyState title="No practices yet">A curator defines the first practice above.</EmptyState> : (
+        <table className="w-full text-sm">
+          <thead><tr><th scope="col" className="text-left">Practice</th><th scope="col">Statements</th><th scope="col">Seeded</th><th scope="col">Open</th></tr></thead>
+          <tbody>{rows.map((p) => (
+            <tr key={p.id} className="border-t border-rule">
+              <td>{p.label}</td><td>{p.statements}</td><td>{p.is_seeded ? "yes" : "no"}</td>
+              <td><Link className="underline" href={`/dashboards/practice-over-time?practice=${p.id}`}>dashboards</Link> · <Link className="underline" href={`/trails?practice=${p.id}`}>trails</Link></td>
+            </tr>
+          ))}</tbody>
+        </table>
+      )}
+    </main>
+  );
+}

@@ -1,0 +1,23 @@
+import { Suspense } from "react";
+import { requirePage } from "@/lib/server/session";
+import { getDb } from "@/db";
+import { venueOptions } from "@/lib/dashboards/venues";
+import { DashboardTabs } from "@/components/dashboards/dashboard-tabs";
+import { FiltersBar } from "@/components/dashboards/filters-bar";
+import { DashboardView } from "@/components/dashboards/dashboard-view";
+
+export default async function PracticeTrailsPage({ searchParams }: { searchParams: Promise<Record<string, string>> }) {
+  await requirePage("corpus:read");
+  const search = new URLSearchParams(await searchParams).toString();
+  const venues = await venueOptions(getDb());
+  return (
+    <main className="mx-auto max-w-6xl space-y-4 p-6">
+      <h1 className="text-2xl font-semibold">Trail graph of a practice</h1>
+      <DashboardTabs current="trail-graph" search={search} />
+      <Suspense fallback={<p role="status">Loading…</p>}>
+        <FiltersBar venues={venues} />
+        <DashboardView name="trail-graph" />
+      </Suspense>
+    </main>
+  );
+}
