@@ -1,0 +1,151 @@
+/**
+ * Storing a mined article: all rows or none, re-mining keeps reviews, the same file twice is one
+ * article. The real worker code and miner against a suite-owned test database.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ingestFile } from "@/lib/corpus/ingest";
+import { senderFor } from "@/lib/corpus/queue";
+import { queueArticle } from "@/lib/corpus/ingest";
+import { sourcingOf, fingerprints } from "@/lib/corpus/store-mined";
+import { startHarness, waitForArticles, rowCounts, type Harness } from "./harness";
+import { goodPdf } from "./fixtures";
+
+let h: Harness;
+let failNext = false;
+beforeAll(async () => {
+  h = await startHarness({
+    concurrency: 1,
+    beforeCommit: async () => {
+      if (failNext) {
+        failNext = false;
+        throw new Error("injected failure after the rows were written");
+      }
+    },
+  });
+});
+afterAll(async () => {
+  await h?.stop();
+});
+
+const text = (s: string) => new TextEncoder().encode(s);
+const ARTICLE = [
+  "Methods",
+  "Reliability above .70 is acceptable (Okafor & Lindqvist, 1994, p. 112).",
+  "A loading of at least .40 was required (Brandtner, 2003).",
+  "Values of .80 or higher indicate good reliability (Sorensby, 2008, as cited in Haverkamp, 2011).",
+  "Reliability above .70 is acceptable.",
+  "",
+  "References",
+  "Brandtner, K. (2003). Measuring invented constructs. Fictive Press.",
+  "Okafor, T., & Lindqvist, M. (1994). Invented scales. Journal of Made-up Methods, 2, 100-120.",
+].join("\n");
+
+describe("sourcing and fingerprints", () => {
+  it("decides sourcing from a statement's citations", () => {
+    expect(sourcingOf([])).toBe("unsourced");
+    expect(sourcingOf([{ locator: null, secondary: true }])).toBe("secondary_only");
+    expect(sourcingOf([{ locator: "p. 4", secondary: false }, { locator: null, secondary: true }])).toBe("cited_with_locator");
+    expect(sourcingOf([{ locator: null, secondary: false }])).toBe("cited_no_locator");
+  });
+  it("gives identical sentences different, stable fingerprints by position, insensitive to spacing and quotes", () => {
+    const a = fingerprints([
+      { sentence: "Alpha  above .70 is ‘fine’.", kind: "threshold", statistic: "cronbach_alpha" },
+      { sentence: "Alpha above .70 is 'fine'.", kind: "threshold", statistic: "cronbach_alpha" },
+    ]);
+    const b = fingerprints([{ sentence: "alpha above .70 is 'fine'.", kind: "threshold", statistic: "cronbach_alpha" }]);
+    expect(a[0]).not.toBe(a[1]);
+    expect(b[0]).toBe(a[0]);
+  });
+});
+
+describe("mining pipeline", () => {
+  it("stores the same file once and reports the duplicate", async () => {
+    const data = await goodPdf();
+    const first = await ingestFile(h.db, h.storage, { data, filename: "a.pdf", uploadedBy: null });
+    const second = await ingestFile(h.db, h.storage, { data, filename: "copy-of-a.pdf", uploadedBy: null });
+    expect(second).toEqual({ articleId: first.articleId, duplicate: true });
+    const n = await h.db.selectFrom("articles").select((eb) => eb.fn.countAll<number>().as("n")).executeTakeFirstOrThrow();
+    expect(Number(n.n)).toBe(1);
+    const done = await waitForArticles(h.db, [first.articleId]);
+    expect(done.get(first.articleId)!.status).toBe("done");
+    // Metadata from the document itself filled the empty fields.
+    const a = await h.db.selectFrom("articles").select(["title", "doi", "licence", "pages"]).where("id", "=", first.articleId).executeTakeFirstOrThrow();
+    expect(a).toMatchObject({ title: "Shift Rhythms and Ward Climate: A Study of Invented Hospitals", doi: "10.5555/jics.2019.014", licence: "CC BY 4.0", pages: 2 });
+  });
+
+  it("stores all of an article's rows or none: a failure before commit leaves nothing", async () => {
+    failNext = true;
+    const { articleId } = await ingestFile(h.db, h.storage, { data: text(ARTICLE + "\nOne."), filename: "atomic.txt", uploadedBy: null });
+    // The injected failure is retried (it is "ours", not the file's); the retry stores everything.
+    await waitForArticles(h.db, [articleId]);
+    const events = await h.db.selectFrom("job_events").select(["state", "message"]).where("article_id", "=", articleId).orderBy("id").execute();
+    const retry = events.findIndex((e) => e.state === "retry");
+    expect(retry).toBeGreaterThan(0);
+    expect(events[retry].message).toMatch(/injected failure/);
+    expect(events.at(-1)!.state).toBe("done");
+    const rows = await rowCounts(h.db, [articleId]);
+    expect(rows.statements).toBeGreaterThanOrEqual(3);
+    // No statement was stored twice (the rolled-back try left no rows behind).
+    const ordinals = await h.db.selectFrom("statements").select("ordinal").where("article_id", "=", articleId).execute();
+    expect(new Set(ordinals.map((o) => o.ordinal)).size).toBe(ordinals.length);
+  }, 60_000);
+
+  it("while the failing transaction is open, no partial rows are visible", async () => {
+    let seenInside = -1;
+    let seenOutside = -1;
+    const { articleId } = await ingestFile(h.db, h.storage, { data: text(ARTICLE + "\nTwo."), filename: "visible.txt", uploadedBy: null });
+    failNext = false;
+    await waitForArticles(h.db, [articleId]);
+    // Run the job directly with a probe: inside the transaction the rows exist, outside they do not.
+    const { createMiningJob } = await import("@/workers/mining-job");
+    const { createMiner } = await import("@/lib/mining");
+    const probe = createMiningJob({
+      db: h.db,
+      storage: h.storage,
+      boss: h.boss,
+      createMiner: (o) => createMiner(o),
+      log: { info: () => {}, warn: () => {}, error: () => {} },
+      beforeCommit: async (trx, id) => {
+        seenInside = (await trx.selectFrom("statements").select("id").where("article_id", "=", id).execute()).length;
+        seenOutside = (await rowCounts(h.db, [id])).statements;
+        throw new Error("injected");
+      },
+    });
+    const before = await rowCounts(h.db, [articleId]);
+    await expect(probe.run(articleId)).rejects.toThrow("injected");
+    await probe.close();
+    expect(seenInside).toBe(before.statements);
+    // The outside reader still sees the previous run's rows (old or new, never a mixture).
+    expect(seenOutside).toBe(before.statements);
+    expect(await rowCounts(h.db, [articleId])).toEqual(before);
+  });
+
+  it("re-mining replaces the rows and keeps the curator's reviews on the same statements", async () => {
+    const { articleId } = await ingestFile(h.db, h.storage, { data: text(ARTICLE), filename: "remine.txt", uploadedBy: null });
+    await waitForArticles(h.db, [articleId]);
+    const user = await h.db.insertInto("User").values({ email: "curator@invented.example", name: "Invented Curator", role: "curator" }).returning("id").executeTakeFirstOrThrow();
+    const before = await h.db.selectFrom("statements").select(["id", "fingerprint", "sentence", "sourcing"]).where("article_id", "=", articleId).orderBy("ordinal").execute();
+    expect(before.length).toBeGreaterThanOrEqual(3);
+    // Sourcing as product.md defines it, on the stored rows.
+    expect(before.find((s) => s.sentence.includes("p. 112"))!.sourcing).toBe("cited_with_locator");
+    expect(before.find((s) => s.sentence.includes("Brandtner, 2003"))!.sourcing).toBe("cited_no_locator");
+    expect(before.find((s) => s.sentence === "Reliability above .70 is acceptable.")!.sourcing).toBe("unsourced");
+    await h.db.insertInto("statement_reviews").values({ article_id: articleId, fingerprint: before[0].fingerprint, reviewer_id: user.id, verdict: "correct" }).execute();
+
+    const boss = await senderFor(h.db);
+    await h.db.transaction().execute((trx) => queueArticle(trx, boss, articleId, "remine"));
+    await waitForArticles(h.db, [articleId]);
+    const after = await h.db.selectFrom("statements").select(["id", "fingerprint"]).where("article_id", "=", articleId).orderBy("ordinal").execute();
+    expect(after.map((s) => s.fingerprint)).toEqual(before.map((s) => s.fingerprint));
+    expect(after[0].id).not.toBe(before[0].id);
+    const reviewed = await h.db
+      .selectFrom("statements")
+      .innerJoin("statement_reviews", (j) => j.onRef("statement_reviews.article_id", "=", "statements.article_id").onRef("statement_reviews.fingerprint", "=", "statements.fingerprint"))
+      .select(["statements.sentence", "statement_reviews.verdict"])
+      .where("statements.article_id", "=", articleId)
+      .execute();
+    expect(reviewed).toEqual([{ sentence: before[0].sentence, verdict: "correct" }]);
+    const linked = await h.db.selectFrom("statement_citations").innerJoin("statements", "statements.id", "statement_citations.statement_id").select("statement_id").where("statements.article_id", "=", articleId).execute();
+    expect(linked.length).toBeGreaterThanOrEqual(3);
+  });
+});
