@@ -67,8 +67,12 @@ export function memoryStorage(): FileStorage {
 }
 
 let defaultStorage: FileStorage | null = null;
-/** The process-wide storage (ECHOLINE_FILES_DIR overrides the folder). */
+/**
+ * The process-wide storage. The web server and the worker must resolve the same folder:
+ * ECHOLINE_FILES_DIR, else `files/` inside ECHOLINE_DATA_DIR (set by the process stack), else .data/files.
+ */
 export function getStorage(): FileStorage {
-  defaultStorage ??= folderStorage(process.env.ECHOLINE_FILES_DIR ?? undefined);
+  const dir = process.env.ECHOLINE_FILES_DIR ?? (process.env.ECHOLINE_DATA_DIR ? path.join(process.env.ECHOLINE_DATA_DIR, "files") : undefined);
+  defaultStorage ??= folderStorage(dir);
   return defaultStorage;
 }
