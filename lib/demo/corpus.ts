@@ -846,6 +846,15 @@ function empiricalArticle(ctx: Ctx, d: Draft, index: number, pagesPerArticle: nu
     p1.push(sentence(`This invented study examines that question in ${setting}, where ${c1} is a recurring concern for practitioners.`));
   }
   intro.push(p1);
+  {
+    const lit: DemoSentence[] = [];
+    for (const c of constructs.slice(1)) {
+      const cs = citeOutside(rng.int(1, 2));
+      lit.push(sentence(`${upperFirst(rng.pick(LIT_OPENERS).replace("{c}", c).replace("{p}", population))}${cs.length ? ` ${parenText(cs, ctx)}` : ""}.`, [], cs));
+    }
+    lit.push(sentence(rng.pick(LIT_GAPS).replace("{c}", c1).replace("{p}", population) + "."));
+    intro.push(lit);
+  }
   const earlier = (ctx.corpusByVenue.get(venue.key) ?? []).filter((k) => ctx.works[k].year < year && cites.canCite(k));
   if (earlier.length) {
     const picked = rng.sample(earlier, rng.int(1, 2));
@@ -856,6 +865,11 @@ function empiricalArticle(ctx: Ctx, d: Draft, index: number, pagesPerArticle: nu
     ]);
   }
   intro.push([sentence(`We therefore ask whether ${c1} predicts ${c2}, and whether ${c3 ?? "tenure"} moderates that association.`)]);
+  const hypotheses: DemoSentence[][] = [[
+    sentence(`Hypothesis 1: ${upperFirst(c1)} is positively related to ${c2} among ${population}.`),
+    sentence(`Hypothesis 2: The association between ${c1} and ${c2} is stronger when ${c3 ?? "tenure"} is high.`),
+    sentence(`Both hypotheses follow from the view that ${c1} shapes how people appraise their situation, which in turn guides ${c2}.`),
+  ]];
 
   // Method
   const participants: DemoSentence[] = [
@@ -864,12 +878,21 @@ function empiricalArticle(ctx: Ctx, d: Draft, index: number, pagesPerArticle: nu
     sentence(`Data were collected between ${rng.pick(["January", "March", "April", "September"])} and ${rng.pick(["June", "July", "November", "December"])} ${year - rng.int(1, 2)}.`, [], [], true),
   ];
   if (rng.chance(0.3)) participants.push(sentence(`Each participant received a voucher worth €${rng.pick([5, 10, 15, 20])} for taking part.`, [], [], true));
+  const procedure: DemoSentence[] = [
+    sentence(rng.pick(["Participation was voluntary and anonymous, and participants could withdraw at any time without giving a reason.", "The study followed the ethical guidelines of the participating institutions, and all participants gave informed consent."])),
+    sentence(`Questionnaires were distributed ${rng.pick(["online", "on paper during working hours", "through the organisations' internal mail", "by trained research assistants"])} and took about ${rng.int(10, 25)} minutes to complete.`, [], [], true),
+    sentence(`Of ${n + rng.int(40, 300)} invited ${population}, ${n} returned usable questionnaires.`, [], [], true),
+  ];
   const points = rng.pick([5, 7]);
   const practices = practicesFor(rng, analysis, year);
   const measures: DemoSentence[] = [
     sentence(`All constructs were measured with established multi-item scales rated on a ${points}-point Likert scale ranging from 1 (strongly disagree) to ${points} (strongly agree).`, [], [], true),
     sentence(`${upperFirst(c1)} was measured with ${rng.int(4, 9)} items and ${c2} with ${rng.int(3, 8)} items; Table ${rng.int(1, 2)} lists the wording.`, [], [], true),
   ];
+  for (const c of constructs.slice(2)) {
+    const cs = citeOutside(1);
+    measures.push(sentence(`${upperFirst(c)} was assessed with ${rng.int(3, 8)} items adapted from earlier work${cs.length ? ` ${parenText(cs, ctx)}` : ""}; a sample item reads "${rng.pick(ITEM_STEMS).replace("{c}", c)}".`, [], cs));
+  }
   const alphaKey = practices.find((k) => k === "alpha70" || k === "alpha60");
   const alphaThreshold = alphaKey ? PRACTICES[alphaKey].stats[0].value : 0.7;
   if (alphaKey) measures.push(thresholdSentence(a, alphaKey));
@@ -917,7 +940,7 @@ function empiricalArticle(ctx: Ctx, d: Draft, index: number, pagesPerArticle: nu
 
   const method: DemoBlock[] = [
     { heading: "2. Method", level: 1, section: "methods", paragraphs: [] },
-    { heading: "2.1 Participants", level: 2, section: "methods", paragraphs: [participants] },
+    { heading: "2.1 Participants and procedure", level: 2, section: "methods", paragraphs: [participants, procedure] },
     { heading: "2.2 Measures", level: 2, section: "methods", paragraphs: [measures] },
     { heading: "2.3 Data analysis", level: 2, section: "methods", paragraphs: [analysisSentences] },
   ];
@@ -949,14 +972,17 @@ function empiricalArticle(ctx: Ctx, d: Draft, index: number, pagesPerArticle: nu
       { kind: "threshold", statistic: "cronbach_alpha", comparator: ">=", value: 0.6, framing: "contextual", procedure: null, practice: "alpha60", origin: "methods_with_locator" },
     ], c));
   }
-  const extra = Math.max(0, Math.round((pagesPerArticle - 3) * 7));
+  const extra = Math.max(0, Math.round((pagesPerArticle - 3) * (venue.twoColumn ? 11 : 8.5)));
   const blocks: DemoBlock[] = [
     { heading: "1. Introduction", level: 1, section: "introduction", paragraphs: intro },
+    { heading: "1.1 Hypotheses", level: 2, section: "introduction", paragraphs: hypotheses },
     ...method,
     results,
     { heading: "4. Discussion", level: 1, section: "discussion", paragraphs: discussion },
+    { heading: "4.1 Implications", level: 2, section: "discussion", paragraphs: fillerParagraphs(rng, 6, constructs, population) },
   ];
-  if (extra > 0) blocks.push({ heading: "4.1 Further considerations", level: 2, section: "discussion", paragraphs: fillerParagraphs(rng, extra, constructs, population) });
+  if (extra > 0) blocks.push({ heading: "4.2 Further considerations", level: 2, section: "discussion", paragraphs: fillerParagraphs(rng, extra, constructs, population) });
+  blocks.push({ heading: "5. Conclusion", level: 1, section: "discussion", paragraphs: [[sentence(`This invented study adds evidence on ${c1} and ${c2} among ${population}; its measures and cut-offs are reported so that readers can judge them.`)]] });
 
   const doi = ctx.nextDoi(venue, year);
   const abstract = `This invented demo article reports a study of ${c1} and ${c2} among ${n} ${population}. ${upperFirst(c1)} was associated with ${c2}, and the association depended on ${c3 ?? "tenure"}. The text, names and numbers are invented for demonstration.`;
@@ -1006,7 +1032,34 @@ function reportedFor(rng: Rng, practiceKey: string, c1: string, c2: string): Dem
   }
 }
 
+const LIT_OPENERS = [
+  "Several studies have examined {c} as an antecedent of well-being and performance",
+  "Research on {c} has grown steadily over the past two decades",
+  "{c} is usually described as a relatively stable characteristic of {p}",
+  "Reviews of the field describe {c} as a central but loosely defined concept",
+  "Work on {c} has mostly relied on convenience samples",
+  "Longitudinal evidence on {c} remains scarce",
+];
+const LIT_GAPS = [
+  "Few studies have examined {c} among {p}, and even fewer have reported how their measures performed",
+  "It therefore remains unclear whether findings on {c} generalise to {p}",
+  "The present study addresses this gap with a larger sample of {p}",
+];
+const ITEM_STEMS = [
+  "I often think about {c} at the end of the day",
+  "In my situation, {c} is something I notice every week",
+  "People around me would say that {c} matters to me",
+];
+
 const FILLER = [
+  "A second reading of the results points to the importance of context when {c} is interpreted.",
+  "Readers should keep in mind that the associations reported here are modest in size.",
+  "The present design cannot separate stable differences between people from changes within them.",
+  "Where {p} have more control over their routines, {c} may play a different role.",
+  "The findings are consistent with accounts that treat {c} as a resource rather than a burden.",
+  "Training programmes could address {c} directly and evaluate the effect with a comparison group.",
+  "Managers and practitioners often ask for simple rules, but the evidence here calls for judgement.",
+  "Measurement choices shape what can be concluded, and they deserve as much attention as the hypotheses.",
   "The pattern of results invites a more careful reading of how {c} is understood by {p} themselves.",
   "One interpretation is that {c} operates through everyday routines rather than through single events.",
   "Qualitative follow-up interviews could show which aspects of {c} participants find most salient.",
@@ -1121,7 +1174,7 @@ function methodsArticle(ctx: Ctx, d: Draft, index: number): DemoArticle {
   const blocks: DemoBlock[] = [
     { heading: "1. Introduction", level: 1, section: "introduction", paragraphs: intro },
     { heading: "2. Method", level: 1, section: "methods", paragraphs: [methodSentences] },
-    { heading: "3. Results", level: 1, section: "results", paragraphs: [results] },
+    { heading: "3. Results", level: 1, section: "results", paragraphs: [results, ...fillerParagraphs(rng, 4, ["the criterion", "sample size", "model size", "the cut-off"], "applied researchers")] },
     { heading: "4. Discussion and recommendations", level: 1, section: "discussion", paragraphs: [body, [sentence("Cut-off values are aids to judgement; reporting the conditions under which they were derived matters more than the numbers themselves.")]] },
   ];
   const doi = ctx.nextDoi(d.venue, d.year);
