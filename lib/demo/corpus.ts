@@ -584,12 +584,14 @@ export function referenceText(w: DemoWork): string {
 /** Tracks what one article cites, so in-text citations and the reference list always agree. */
 class CiteBook {
   works = new Map<string, DemoWork>();
+  /** Works this article has only read about ("as cited in"); citing them directly too would be incoherent. */
+  private secondhand = new Set<string>();
   private byIntext = new Map<string, string>();
   constructor(private ctx: Ctx, private selfYear: number) {}
   /** A work is citable when it is not newer than the article and no other cited work reads the same in text. */
   canCite(key: string): boolean {
     const w = this.ctx.works[key];
-    if (!w || w.year > this.selfYear) return false;
+    if (!w || w.year > this.selfYear || this.secondhand.has(key)) return false;
     const k = `${intextAuthors(w.authors, false)}|${w.year}`;
     const other = this.byIntext.get(k);
     return other === undefined || other === key;
@@ -607,7 +609,8 @@ class CiteBook {
   /** "as cited in": only the work it was read in enters the reference list (APA 7, sec. 8.6). */
   citeSecondary(originalKey: string, viaKey: string): DemoCitation | null {
     const orig = this.ctx.works[originalKey];
-    if (!this.canCite(viaKey)) return null;
+    if (!this.canCite(viaKey) || this.works.has(originalKey)) return null;
+    this.secondhand.add(originalKey);
     const via = this.ctx.works[viaKey];
     this.add(via);
     return { workKey: originalKey, authors: intextAuthors(orig.authors, false), year: String(orig.year), locator: null, secondary: true, citedInKey: viaKey, narrative: false };
@@ -746,7 +749,7 @@ function thresholdSentence(a: ArticleCtx, practiceKey: string): DemoSentence {
     ["unsourced", pUnsourced],
     ["precedent", pool.length ? lerp(h.precedent, year) * 0.88 : 0],
     ["precedent_silent", silentPool.length ? 0.04 : 0],
-    ["secondary", secondaryPool.length && sourceOk ? h.secondary : 0],
+    ["secondary", secondaryPool.length && sourceOk && !cites.works.has(def.source.work) ? h.secondary : 0],
     ["misquote", misOk ? lerp(h.misquote, year) : 0],
     ["methods_with_locator", sourceOk ? (1 - pUnsourced) * lerp(h.locator, year) : 0],
     ["methods_no_locator", sourceOk ? (1 - pUnsourced) * (1 - lerp(h.locator, year)) : 0],
