@@ -6,6 +6,7 @@
  */
 import { mkdir, readFile, rename, writeFile } from "node:fs/promises";
 import path from "node:path";
+import { sql } from "kysely";
 import type { DB } from "@/db";
 import { IngestError, ingestFile, sha256Hex } from "@/lib/corpus/ingest";
 import { getStorage, type FileStorage } from "@/lib/storage";
@@ -68,6 +69,7 @@ export async function loadDemoCorpus(db: DB, opts: LoadDemoOptions = {}): Promis
 
   let created = 0;
   let skipped = 0;
+  let doiTaken = 0;
   const started = Date.now();
   for (const [i, a] of corpus.articles.entries()) {
     const filename = pdfFilename(a);
@@ -76,6 +78,14 @@ export async function loadDemoCorpus(db: DB, opts: LoadDemoOptions = {}): Promis
     const existing = await db.selectFrom("articles").select("id").where("file_sha256", "=", sha).executeTakeFirst();
     if (existing) {
       skipped++;
+      continue;
+    }
+    // A corpus generated with another count or seed reuses DOIs for different files: keep the
+    // article that is there rather than fail the start.
+    const sameDoi = await db.selectFrom("articles").select("id").where(sql<string>`lower(doi)`, "=", a.doi.toLowerCase()).executeTakeFirst();
+    if (sameDoi) {
+      skipped++;
+      doiTaken++;
       continue;
     }
     try {
@@ -99,11 +109,12 @@ export async function loadDemoCorpus(db: DB, opts: LoadDemoOptions = {}): Promis
       // A curator may already have loaded a (different) file under a demo DOI: keep going.
       if (err instanceof IngestError && err.code === "doi_taken") {
         skipped++;
-        log(`demo: skipped ${filename}: ${err.message}`);
+        doiTaken++;
       } else throw err;
     }
     if ((i + 1) % 50 === 0) log(`demo: ${i + 1}/${corpus.articles.length} files (${created} new) in ${((Date.now() - started) / 1000).toFixed(1)} s`);
   }
+  if (doiTaken) log(`demo: ${doiTaken} files skipped because an article already has their DOI (a demo corpus of another size or seed was loaded before)`);
   log(`demo: ${created} articles queued for mining, ${skipped} already present (${((Date.now() - started) / 1000).toFixed(1)} s)`);
   return { created, skipped };
 }

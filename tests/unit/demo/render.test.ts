@@ -97,7 +97,9 @@ describe("upload metadata", () => {
   });
 
   it("BibTeX parses with citation-js into the same DOIs, titles and authors", () => {
-    const items = new Cite(renderMetadataBibtex(corpus)).data as { DOI?: string; title?: string; author?: { family?: string }[]; issued?: { "date-parts"?: number[][] } }[];
+    // citation-js's bundled typings declare a zero-argument constructor; the documented call takes the input.
+    const CiteWithInput = Cite as unknown as new (input: string) => { data: unknown[] };
+    const items = new CiteWithInput(renderMetadataBibtex(corpus)).data as { DOI?: string; title?: string; author?: { family?: string }[]; issued?: { "date-parts"?: number[][] } }[];
     expect(items).toHaveLength(corpus.articles.length);
     for (const a of corpus.articles) {
       const it = items.find((x) => x.DOI === a.doi);
