@@ -15,6 +15,7 @@ import { recordEvent } from "@/lib/corpus/events";
 import { replaceMinedRows } from "@/lib/corpus/store-mined";
 import { enabledProcedures } from "@/lib/corpus/procedures-store";
 import { documentMetaUpdate } from "@/lib/metadata/document";
+import { applyBatchMetadataByDoi } from "@/lib/corpus/batches";
 import { onArticleMined } from "./graph-jobs";
 import { RETRY, type JobDefinition } from "./job-types";
 
@@ -129,7 +130,11 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
       const locked = await trx.selectFrom("articles").select(["id", "title", "authors", "year", "doi", "licence", "venue_id"]).where("id", "=", articleId).forUpdate().executeTakeFirst();
       if (!locked) return;
       await replaceMinedRows(trx, articleId, line);
-      const metaUpdate = await documentMetaUpdate(trx, locked, result.meta);
+      // A metadata file's entry (matched by the document's DOI) wins over the document's own claims.
+      const docDoi = (result.meta as { doi?: string | null } | undefined)?.doi ?? null;
+      await applyBatchMetadataByDoi(trx, articleId, locked.doi ?? docDoi);
+      const current = await trx.selectFrom("articles").select(["title", "authors", "year", "doi", "licence", "venue_id"]).where("id", "=", articleId).executeTakeFirstOrThrow();
+      const metaUpdate = await documentMetaUpdate(trx, current, result.meta);
       await trx
         .updateTable("articles")
         .set({

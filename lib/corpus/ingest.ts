@@ -9,6 +9,9 @@ import type { FileStorage } from "@/lib/storage";
 import { detectKind } from "./detect";
 import { enqueueMining, senderFor } from "./queue";
 import { recordEvent } from "./events";
+import { normaliseDoi } from "./doi";
+
+export { normaliseDoi } from "./doi";
 
 export type IngestMetadata = {
   title?: string;
@@ -40,12 +43,6 @@ export class IngestError extends Error {
 
 export function sha256Hex(data: Uint8Array): string {
   return createHash("sha256").update(data).digest("hex");
-}
-
-export function normaliseDoi(doi: string | undefined | null): string | null {
-  if (!doi) return null;
-  const d = doi.trim().replace(/^(https?:\/\/(dx\.)?doi\.org\/|doi:\s*)/i, "").trim();
-  return /^10\.\S+\/\S+$/.test(d) ? d : null;
 }
 
 export async function ingestFile(db: DB, storage: FileStorage, input: IngestInput): Promise<{ articleId: string; duplicate: boolean }> {

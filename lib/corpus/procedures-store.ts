@@ -2,7 +2,7 @@
  * The curated list of known misdescribed procedures, stored in procedure_patterns so curators can
  * edit it; the worker hands the enabled ones to the miner.
  */
-import { z } from "zod";
+import type { ProcedureInput } from "./schemas";
 import { sql } from "kysely";
 import type { DB } from "@/db";
 import { defaultProcedures, type ProcedurePattern } from "@/lib/mining/procedures";
@@ -52,31 +52,7 @@ export async function enabledProcedures(db: DB): Promise<ProcedurePattern[]> {
     .map(({ key, label, description, allOf, anyOf, noneOf }) => ({ key, label, description, allOf, anyOf, noneOf }));
 }
 
-const regexSource = z
-  .string()
-  .trim()
-  .min(1, "A pattern cannot be empty.")
-  .max(500, "Keep a pattern under 500 characters.")
-  .refine((s) => {
-    try {
-      new RegExp(s, "i");
-      return true;
-    } catch {
-      return false;
-    }
-  }, "This is not a valid regular expression.");
-
-/** One schema for the form and the route handler. */
-export const ProcedureInput = z.object({
-  key: z.string().trim().regex(/^[a-z][a-z0-9_]{2,63}$/, "Use 3–64 lower-case letters, digits or underscores, starting with a letter."),
-  label: z.string().trim().min(3, "Give a label of at least 3 characters.").max(200),
-  description: z.string().trim().min(10, "Describe the misdescription in at least 10 characters.").max(2000),
-  allOf: z.array(regexSource).min(1, "At least one pattern must be required (all of)."),
-  anyOf: z.array(regexSource).default([]),
-  noneOf: z.array(regexSource).default([]),
-  enabled: z.boolean().default(true),
-});
-export type ProcedureInput = z.infer<typeof ProcedureInput>;
+export { ProcedureInput } from "./schemas";
 
 export async function createProcedure(db: DB, input: ProcedureInput, by: string): Promise<string> {
   const row = await db

@@ -6,7 +6,7 @@
 import type { Transaction } from "kysely";
 import { z } from "zod";
 import type { Database } from "@/db";
-import { normaliseDoi } from "@/lib/corpus/ingest";
+import { normaliseDoi } from "@/lib/corpus/doi";
 
 const DocumentMeta = z
   .object({

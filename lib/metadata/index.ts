@@ -7,7 +7,7 @@ import { Cite, plugins } from "@citation-js/core";
 import "@citation-js/plugin-bibtex";
 import "@citation-js/plugin-ris";
 import Papa from "papaparse";
-import { normaliseDoi } from "@/lib/corpus/ingest";
+import { normaliseDoi } from "@/lib/corpus/doi";
 
 export type MetadataEntry = {
   doi: string | null;
