@@ -8,6 +8,8 @@ import type { Role } from "./schema/accounts";
 import { hashPassword } from "@/lib/server/passwords";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { seedPractices } from "@/lib/graph/seed";
+import { ensureDemoVenues } from "@/lib/demo/load";
+import { DEMO_VENUES } from "@/lib/demo/corpus";
 
 export const DEMO_ACCOUNTS: { email: string; name: string; role: Role; password: string }[] = [
   { email: "admin@echoline.local", name: "Demo Admin", role: "admin", password: "admin-demo-pass" },
@@ -15,13 +17,6 @@ export const DEMO_ACCOUNTS: { email: string; name: string; role: Role; password:
   { email: "editor@echoline.local", name: "Demo Editor", role: "editor", password: "editor-demo-pass" },
   { email: "instructor@echoline.local", name: "Demo Instructor", role: "instructor", password: "instructor-demo-pass" },
   { email: "reader@echoline.local", name: "Demo Reader", role: "reader", password: "reader-demo-pass" },
-];
-
-// Invented venues (no real journal): enough for filters and venue comparison before any upload.
-export const SEED_VENUES = [
-  { name: "Harrowgate Journal of Survey Practice", abbreviation: "HJSP", is_methods_venue: false },
-  { name: "Lowmere Review of Organisational Studies", abbreviation: "LROS", is_methods_venue: false },
-  { name: "Quillon Methods Quarterly", abbreviation: "QMQ", is_methods_venue: true },
 ];
 
 export async function seedAccounts(db: DB): Promise<void> {
@@ -36,19 +31,14 @@ export async function seedAccounts(db: DB): Promise<void> {
   }
 }
 
+/** The invented demo venues (the same ones the demo corpus uses), and the demo editor's link to one. */
 export async function seedVenues(db: DB): Promise<void> {
-  for (const v of SEED_VENUES) {
-    await db
-      .insertInto("venues")
-      .values({ ...v, issn: null, is_demo: true })
-      .onConflict((oc) => oc.expression(sql`lower(name)`).doNothing())
-      .execute();
-  }
-  // The demo editor benchmarks the first venue.
+  const ids = await ensureDemoVenues(db, DEMO_VENUES);
+  const first = DEMO_VENUES.find((v) => !v.isMethodsVenue);
   const editor = await db.selectFrom("User").select("id").where("email", "=", "editor@echoline.local").executeTakeFirst();
-  const venue = await db.selectFrom("venues").select("id").where("name", "=", SEED_VENUES[0].name).executeTakeFirst();
-  if (editor && venue) {
-    await db.insertInto("editor_venues").values({ user_id: editor.id, venue_id: venue.id }).onConflict((oc) => oc.doNothing()).execute();
+  const venueId = first && ids.get(first.key);
+  if (editor && venueId) {
+    await db.insertInto("editor_venues").values({ user_id: editor.id, venue_id: venueId }).onConflict((oc) => oc.doNothing()).execute();
   }
 }
 
