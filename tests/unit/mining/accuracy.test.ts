@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { createMiner, isErrorLine, mineText } from "@/lib/mining/index";
-import { ensureGoldPdfs, generatedDir, pdfExcerpts } from "@/tests/fixtures/make-gold-pdfs";
+import { ensureGoldPdfs, generatedDir, interleavedExcerpts, pdfExcerpts } from "@/tests/fixtures/make-gold-pdfs";
 import { f1, loadGold, newTally, score } from "./gold";
 
 const gold = loadGold();
@@ -17,8 +17,9 @@ describe("miner accuracy on the gold set", () => {
     await ensureGoldPdfs();
     for (const { excerpt, text } of gold) score(t, excerpt, mineText(text).statements, "txt");
     const miner = createMiner();
-    for (const { id } of pdfExcerpts) {
-      const file = path.join(generatedDir, `${id}.pdf`);
+    // The interleaved drawings are the same excerpts again, drawn line by line across the columns.
+    for (const { id, file: name } of [...pdfExcerpts.map((e) => ({ id: e.id, file: e.id })), ...interleavedExcerpts]) {
+      const file = path.join(generatedDir, `${name}.pdf`);
       const out = await miner.mine({ data: new Uint8Array(readFileSync(file)), filename: file });
       if (isErrorLine(out.line)) throw new Error(`${id}: ${out.line.error.message}`);
       const excerpt = gold.find((g) => g.excerpt.id === id)!.excerpt;
@@ -29,7 +30,7 @@ describe("miner accuracy on the gold set", () => {
     const goldStatements = gold.reduce((n, g) => n + g.excerpt.sentences.reduce((m, s) => m + s.statements.length, 0), 0);
     const negatives = gold.reduce((n, g) => n + g.excerpt.negatives.length, 0);
     const row = (name: string, v: number, bar: number) => ({ measure: name, value: Number(v.toFixed(3)), bar });
-    console.log(`gold: ${gold.length} excerpts, ${goldStatements} labelled statements, ${negatives} negatives; ${pdfExcerpts.length} also as PDF`);
+    console.log(`gold: ${gold.length} excerpts, ${goldStatements} labelled statements, ${negatives} negatives; ${pdfExcerpts.length} also as PDF (${interleavedExcerpts.length} of them also drawn interleaved)`);
     console.table([
       row("threshold F1", f1(t, "threshold"), 0.92),
       row("reported F1", f1(t, "reported"), 0.9),
