@@ -63,7 +63,7 @@ export async function startStack(cfg: StackConfig): Promise<Stack> {
   const start = (name: string, cmd: string, args: string[]) => {
     const child = spawn(cmd, args, { cwd: ROOT, env, stdio: ["ignore", "pipe", "pipe"] });
     const prefix = (chunk: Buffer) =>
-      chunk.toString().split("\n").filter(Boolean).map((l) => `[${name}] ${l}`).join("\n") + "\n";
+      chunk.toString().split("\n").filter(Boolean).map((l) => (l.startsWith(`[${name}]`) ? l : `[${name}] ${l}`)).join("\n") + "\n";
     child.stdout?.on("data", (c: Buffer) => !cfg.quiet && process.stdout.write(prefix(c)));
     child.stderr?.on("data", (c: Buffer) => process.stderr.write(prefix(c)));
     child.on("exit", (code, signal) => {
