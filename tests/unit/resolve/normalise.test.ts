@@ -43,7 +43,7 @@ describe("normaliseTitle", () => {
   });
   it("reads editions", () => {
     expect(editionOf("Designing questionnaires (3rd ed.)")).toBe(3);
-    expect(editionOf("Psychometric theory, second edition")).toBe(2);
+    expect(editionOf("Scale construction craft, second edition")).toBe(2);
     expect(editionOf("3rd edn")).toBe(3);
     expect(editionOf("Designing questionnaires")).toBeNull();
   });
