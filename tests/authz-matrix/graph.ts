@@ -4,13 +4,13 @@ const CURATE: MatrixRow["allow"] = ["admin", "curator"];
 
 // Works, practices, trails, source checks, dashboards (the citation-graph feature).
 export const graphRows: MatrixRow[] = [
-  { file: "(app)/dashboards/page.tsx", path: "/dashboards", method: "PAGE", allow: ANY_SIGNED_IN },
-  { file: "(app)/dashboards/[name]/page.tsx", path: "/dashboards/practice-over-time", method: "PAGE", allow: ANY_SIGNED_IN },
-  { file: "(app)/trails/page.tsx", path: "/trails", method: "PAGE", allow: ANY_SIGNED_IN },
-  { file: "(app)/trails/[statementId]/page.tsx", path: `/trails/${SAMPLE_ID}`, method: "PAGE", allow: ANY_SIGNED_IN },
-  { file: "(app)/works/page.tsx", path: "/works", method: "PAGE", allow: ANY_SIGNED_IN },
-  { file: "(app)/works/[id]/page.tsx", path: `/works/${SAMPLE_ID}`, method: "PAGE", allow: ANY_SIGNED_IN },
-  { file: "(app)/practices/page.tsx", path: "/practices", method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/dashboards/page.tsx", path: "/dashboards", method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/dashboards/[name]/page.tsx", path: "/dashboards/practice-over-time", method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/trails/page.tsx", path: "/trails", method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/trails/[statementId]/page.tsx", path: `/trails/${SAMPLE_ID}`, method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/works/page.tsx", path: "/works", method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/works/[id]/page.tsx", path: `/works/${SAMPLE_ID}`, method: "PAGE", allow: ANY_SIGNED_IN },
+  { file: "app/(app)/practices/page.tsx", path: "/practices", method: "PAGE", allow: ANY_SIGNED_IN },
   { file: "api/dashboards/[name]/route.ts", path: "/api/dashboards/practice-over-time", method: "GET", allow: ANY_SIGNED_IN },
   { file: "api/trails/[statementId]/route.ts", path: `/api/trails/${SAMPLE_ID}`, method: "GET", allow: ANY_SIGNED_IN },
   { file: "api/practices/route.ts", path: "/api/practices", method: "GET", allow: ANY_SIGNED_IN },
