@@ -42,6 +42,21 @@ export async function pickPractice(db: DB, f: Filters): Promise<PracticeRef | nu
   return (await q.orderBy("is_seeded", "desc").orderBy("key").limit(1).executeTakeFirst()) ?? null;
 }
 
+/**
+ * pickPractice as a CTE named `p` (id, key, label, statistic; at most one row), so a chart fetches
+ * its practice and its data in one statement (one round trip) instead of two.
+ */
+export function practiceCte(f: Filters) {
+  const stat = f.statistic ? sql`and statistic = ${f.statistic}` : sql``;
+  const asked = f.practice ? sql`(select id, key, label, statistic, 0 as pri from practices where id = ${f.practice}::uuid ${stat}) union all` : sql``;
+  return sql`p as (select id, key, label, statistic from (${asked}
+    (select id, key, label, statistic, 1 as pri from practices where true ${stat} order by is_seeded desc, key limit 1)) x
+    order by pri limit 1)`;
+}
+
+/** The framing_key of the roll-ups that keep a row set per framing ('*' = any framing). */
+export const framingKey = (f: Filters): string => f.framing ?? "*";
+
 /** The WHERE part shared by every fact view: venues, years and statement framing. */
 export function factWhere(f: Filters, alias = "") {
   const c = (col: string) => sql.ref(alias ? `${alias}.${col}` : col);

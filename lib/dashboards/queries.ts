@@ -1,7 +1,7 @@
 import { sql } from "kysely";
 import type { DB } from "@/db";
 import { wilson, newcombeDifference, cochranArmitage } from "@/lib/stats";
-import { countWhere, factWhere, pickPractice, type Filters, type PracticeRef } from "./filters";
+import { countWhere, factWhere, framingKey, practiceCte, type Filters, type PracticeRef } from "./filters";
 import type { Row } from "./csv";
 
 export interface Table {
@@ -26,26 +26,33 @@ const empty = (practice: PracticeRef | null, tables: Record<string, Table>): Das
  * firmest sourcing (with locator > without locator > second-hand only > unsourced), so the split
  * adds up to the asserting share.
  */
+/**
+ * The chart's one statement: the practice, eligible articles per year, and asserting articles per
+ * year and firmest sourcing rank (from the roll-up dash_article_rank_counts).
+ */
+export function practiceOverTimeSql(f: Filters) {
+  return sql<{ practice: PracticeRef | null; counts: { year: number; n: number }[]; arts: { year: number; rank: number; n: number }[] }>`
+    with ${practiceCte(f)},
+    counts as (select year, sum(n)::int as n from dash_article_counts where true ${countWhere(f)} group by year),
+    arts as (select year, rank, sum(n)::int as n from dash_article_rank_counts
+      where practice_id = (select id from p) and framing_key = ${framingKey(f)} ${countWhere(f)} group by year, rank)
+    select (select row_to_json(p) from p) as practice,
+      coalesce((select json_agg(json_build_object('year', year, 'n', n) order by year) from counts), '[]') as counts,
+      coalesce((select json_agg(json_build_object('year', year, 'rank', rank, 'n', n)) from arts), '[]') as arts`;
+}
+
 export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
-  const practice = await pickPractice(db, f);
+  const { practice, counts, arts } = (await practiceOverTimeSql(f).execute(db)).rows[0];
   const columns = ["year", "articles", "asserting", "share", "share_lower", "share_upper", ...SOURCING_BY_RANK.flatMap((s) => [s, `${s}_share`, `${s}_lower`, `${s}_upper`])];
   const table: Table = { title: "Share of articles asserting the practice, by year and sourcing", columns, rows: [] };
   if (!practice) return empty(null, { byYear: table });
-  const [counts, arts] = await Promise.all([
-    sql<{ year: number; n: number }>`select year, sum(n)::int as n from dash_article_counts where true ${countWhere(f)} group by year order by year`.execute(db),
-    sql<{ year: number; rank: number; n: number }>`
-      select year, rank, count(*)::int as n from (
-        select year, article_id, min(sourcing_rank) as rank from dash_statement_facts
-        where practice_id = ${practice.id} ${factWhere(f)} group by year, article_id) a
-      group by year, rank`.execute(db),
-  ]);
   const byYear = new Map<number, number[]>();
-  for (const r of arts.rows) {
+  for (const r of arts) {
     const v = byYear.get(r.year) ?? [0, 0, 0, 0];
     v[r.rank - 1] += r.n;
     byYear.set(r.year, v);
   }
-  for (const c of counts.rows) {
+  for (const c of counts) {
     const v = byYear.get(c.year) ?? [0, 0, 0, 0];
     const asserting = v.reduce((a, b) => a + b, 0);
     const w = wilson(asserting, c.n);
@@ -74,9 +81,44 @@ export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
 
 export const END_KINDS = ["methods_source", "empirical_precedent", "unclassified", "unresolved", "no_citation", "cycle", "depth_limit", "not_built"] as const;
 
+type TopWork = { work_id: string; title: string | null; first_author: string | null; year: string | null; work_type: string; in_corpus: boolean; n: number; loc: number };
+
+/**
+ * A practice's most cited works (as CTE `top`: work_id, n, loc) under the filters. Without a venue
+ * or year filter this reads the roll-up dash_work_counts (an index scan of `limit` rows); a venue or
+ * year filter has to count the citation facts it keeps, since no smaller roll-up can answer it.
+ * Ties are broken by work id in both paths, so they pick the same works.
+ */
+export function topWorksCte(f: Filters, limit: number) {
+  if (!f.venues?.length && f.from === undefined && f.to === undefined) {
+    return sql`top as (select work_id, n, loc from dash_work_counts
+      where practice_id = (select id from p) and framing_key = ${framingKey(f)} order by n desc, work_id limit ${limit})`;
+  }
+  return sql`top as (select work_id, count(*)::int as n, (count(*) filter (where has_locator))::int as loc from dash_citation_facts
+      where practice_id = (select id from p) and work_id is not null ${factWhere(f)}
+      group by work_id order by n desc, work_id limit ${limit})`;
+}
+
+/** Dashboard 2 in one statement: ends per year, trail lengths, and the ten most cited sources. */
+export function trailEndsSql(f: Filters) {
+  return sql<{ practice: PracticeRef | null; by_end: { year: number; end_kind: string; n: number }[]; by_length: { length: number; n: number }[]; top: TopWork[] }>`
+    with ${practiceCte(f)},
+    s as (select year, end_kind, trail_length, sum(n)::int as n from dash_statement_counts
+      where practice_id = (select id from p) ${factWhere(f)} group by 1, 2, 3),
+    ${topWorksCte(f, 10)}
+    select (select row_to_json(p) from p) as practice,
+      coalesce((select json_agg(json_build_object('year', year, 'end_kind', end_kind, 'n', n) order by year, end_kind)
+        from (select year, end_kind, sum(n)::int as n from s group by 1, 2) x), '[]') as by_end,
+      coalesce((select json_agg(json_build_object('length', trail_length, 'n', n) order by trail_length)
+        from (select trail_length, sum(n)::int as n from s where trail_length is not null group by 1) x), '[]') as by_length,
+      coalesce((select json_agg(json_build_object('work_id', t.work_id, 'title', w.title, 'first_author', w.first_author, 'year', w.year,
+          'work_type', w.work_type, 'in_corpus', w.article_id is not null, 'n', t.n, 'loc', t.loc) order by t.n desc, t.work_id)
+        from top t join works w on w.id = t.work_id), '[]') as top`;
+}
+
 /** Dashboard 2. Where the practice's trails end per year, trail lengths, and its most cited sources. */
 export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
-  const practice = await pickPractice(db, f);
+  const { practice, by_end: byEnd, by_length: byLength, top } = (await trailEndsSql(f).execute(db)).rows[0];
   const endCols = ["year", "statements", ...END_KINDS.flatMap((k) => [k, `${k}_share`])];
   const ends: Table = { title: "Where trails end, by year (share of the practice's statements)", columns: endCols, rows: [] };
   const lengths: Table = { title: "Trail length (citation hops)", columns: ["length", "statements"], rows: [] };
@@ -86,23 +128,8 @@ export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
     rows: [],
   };
   if (!practice) return empty(null, { ends, lengths, sources });
-  const [byEnd, byLength, top] = await Promise.all([
-    sql<{ year: number; end_kind: string; n: number }>`
-      select year, coalesce(end_kind, 'not_built') as end_kind, count(*)::int as n from dash_statement_facts
-      where practice_id = ${practice.id} ${factWhere(f)} group by 1, 2 order by 1`.execute(db),
-    sql<{ length: number; n: number }>`
-      select trail_length as length, count(*)::int as n from dash_statement_facts
-      where practice_id = ${practice.id} and trail_length is not null ${factWhere(f)} group by 1 order by 1`.execute(db),
-    sql<{ work_id: string; title: string | null; first_author: string | null; year: string | null; work_type: string; in_corpus: boolean; n: number; loc: number }>`
-      with t as (
-        select work_id, count(*)::int as n, (count(*) filter (where has_locator))::int as loc from dash_citation_facts
-        where practice_id = ${practice.id} and work_id is not null ${factWhere(f)}
-        group by work_id order by n desc, work_id limit 10)
-      select t.work_id, w.title, w.first_author, w.year, w.work_type, (w.article_id is not null) as in_corpus, t.n, t.loc
-      from t join works w on w.id = t.work_id order by t.n desc, t.work_id`.execute(db),
-  ]);
   const years = new Map<number, Record<string, number>>();
-  for (const r of byEnd.rows) {
+  for (const r of byEnd) {
     const m = years.get(r.year) ?? {};
     m[r.end_kind] = (m[r.end_kind] ?? 0) + r.n;
     years.set(r.year, m);
@@ -116,8 +143,8 @@ export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
     }
     ends.rows.push(row);
   }
-  lengths.rows = byLength.rows.map((r) => ({ length: r.length, statements: r.n }));
-  sources.rows = top.rows.map((r) => {
+  lengths.rows = byLength.map((r) => ({ length: r.length, statements: r.n }));
+  sources.rows = top.map((r) => {
     const w = wilson(r.loc, r.n);
     return { work_id: r.work_id, title: r.title, first_author: r.first_author, year: r.year, work_type: r.work_type, in_corpus: r.in_corpus, citations: r.n, with_locator: r.loc, locator_rate: r4(w.p), locator_lower: r4(w.lower), locator_upper: r4(w.upper) };
   });
@@ -129,8 +156,25 @@ export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
  * the share of its citations for the practice that go to articles of the same venue. Each venue is
  * compared with the rest of the corpus (the other venues pooled) by Newcombe's hybrid interval.
  */
+type VenueCounts = { venue_id: string; venue: string; is_methods_venue: boolean; articles: number; asserting: number; citations: number; in_venue: number };
+
+/** Dashboard 4 in one statement, over the roll-ups (articles, asserting articles, citations). */
+export function venueComparisonSql(f: Filters) {
+  return sql<{ practice: PracticeRef | null; venues: VenueCounts[] }>`
+    with ${practiceCte(f)},
+    c as (select venue_id, sum(n)::int as n from dash_article_counts where venue_id is not null ${countWhere(f)} group by venue_id),
+    a as (select venue_id, sum(n)::int as n from dash_article_rank_counts
+      where practice_id = (select id from p) and framing_key = ${framingKey(f)} ${countWhere(f)} group by venue_id),
+    pc as (select venue_id, sum(n)::int as n, sum(own)::int as own from dash_citation_counts
+      where practice_id = (select id from p) ${factWhere(f)} group by venue_id)
+    select (select row_to_json(p) from p) as practice,
+      coalesce((select json_agg(json_build_object('venue_id', v.id, 'venue', v.name, 'is_methods_venue', v.is_methods_venue, 'articles', c.n,
+          'asserting', coalesce(a.n, 0), 'citations', coalesce(pc.n, 0), 'in_venue', coalesce(pc.own, 0)) order by v.name)
+        from c join venues v on v.id = c.venue_id left join a on a.venue_id = c.venue_id left join pc on pc.venue_id = c.venue_id), '[]') as venues`;
+}
+
 export async function venueComparison(db: DB, f: Filters): Promise<Dashboard> {
-  const practice = await pickPractice(db, f);
+  const { practice, venues } = (await venueComparisonSql(f).execute(db)).rows[0];
   const table: Table = {
     title: "Venues: share of articles asserting the practice, and in-venue precedent",
     columns: [
@@ -140,15 +184,7 @@ export async function venueComparison(db: DB, f: Filters): Promise<Dashboard> {
     rows: [],
   };
   if (!practice) return empty(null, { venues: table });
-  const r = await sql<{ venue_id: string; venue: string; is_methods_venue: boolean; articles: number; asserting: number; citations: number; in_venue: number }>`
-    with c as (select venue_id, sum(n)::int as n from dash_article_counts where venue_id is not null ${countWhere(f)} group by venue_id),
-    a as (select venue_id, count(distinct article_id)::int as n from dash_statement_facts where practice_id = ${practice.id} ${factWhere(f)} group by venue_id),
-    p as (select venue_id, count(*)::int as n, (count(*) filter (where cited_venue_id = venue_id and cited_article_id <> article_id))::int as own
-          from dash_citation_facts where practice_id = ${practice.id} ${factWhere(f)} group by venue_id)
-    select v.id as venue_id, v.name as venue, v.is_methods_venue, c.n as articles, coalesce(a.n, 0) as asserting,
-      coalesce(p.n, 0) as citations, coalesce(p.own, 0) as in_venue
-    from c join venues v on v.id = c.venue_id left join a on a.venue_id = c.venue_id left join p on p.venue_id = c.venue_id
-    order by v.name`.execute(db);
+  const r = { rows: venues };
   const tot = r.rows.reduce((s, x) => ({ articles: s.articles + x.articles, asserting: s.asserting + x.asserting, citations: s.citations + x.citations, in_venue: s.in_venue + x.in_venue }), { articles: 0, asserting: 0, citations: 0, in_venue: 0 });
   for (const v of r.rows) {
     const rate = wilson(v.asserting, v.articles);

@@ -1,7 +1,8 @@
 import { sql } from "kysely";
 import type { DB } from "@/db";
 import { statementTrail } from "@/lib/graph/trails";
-import { factWhere, pickPractice, type Filters, type PracticeRef } from "./filters";
+import { factWhere, practiceCte, type Filters, type PracticeRef } from "./filters";
+import { topWorksCte } from "./queries";
 
 /** A node of the trail graph as the page draws it: x is the year, so the chain reads in time. */
 export interface GraphNode {
@@ -103,32 +104,52 @@ export async function statementTrailView(db: DB, statementId: string, practiceId
  * citing them (bounded, so the picture stays readable), with statements inside a cited article
  * linked to that article's work.
  */
-export async function practiceTrailView(db: DB, f: Filters, limits = { works: 15, statements: 60 }): Promise<TrailGraphView> {
-  const practice = await pickPractice(db, f);
-  if (!practice) return { practice: null, nodes: [], edges: [], ...asTable([], []) };
-  const r = await sql<{
-    statement_id: string; article_id: string; year: number; work_id: string; cited_article_id: string | null; locator: string | null; secondary: boolean;
-    sentence: string; title: string | null; w_title: string | null; w_author: string | null; w_year: string | null; w_type: string; end_kind: string | null;
-  }>`
-    with top as (
-      select work_id from dash_citation_facts where practice_id = ${practice.id} and work_id is not null ${factWhere(f)}
-      group by work_id order by count(*) desc, work_id limit ${limits.works}),
-    picked as (
-      select distinct on (f.statement_id) f.statement_id from dash_citation_facts f join top using (work_id)
-      where f.practice_id = ${practice.id} ${factWhere(f, "f")} order by f.statement_id),
+type PracticeEdgeRow = {
+  statement_id: string; article_id: string; year: number; work_id: string; cited_article_id: string | null; locator: string | null; secondary: boolean;
+  sentence: string; title: string | null; w_title: string | null; w_author: string | null; w_year: string | null; w_type: string; end_kind: string | null;
+};
+
+/**
+ * The practice trail graph's one statement: top works (from the roll-up when no venue or year
+ * filter is set), the latest statements citing them, and those statements' citations to them.
+ * A statement's year is its article's, the same on all its citation facts, so "latest" needs no
+ * second fact view.
+ */
+export function practiceTrailSql(f: Filters, limits = { works: 15, statements: 60 }) {
+  return sql<{ practice: PracticeRef | null; rows: PracticeEdgeRow[] }>`
+    with ${practiceCte(f)},
+    ${topWorksCte(f, limits.works)},
     latest as (
-      select p.statement_id from picked p join dash_statement_facts d on d.practice_id = ${practice.id} and d.statement_id = p.statement_id
-      order by d.year desc, p.statement_id limit ${limits.statements})
-    select f.statement_id, f.article_id, f.year, f.work_id, f.cited_article_id, c.locator, c.secondary,
-      s.sentence, a.title, w.title as w_title, w.first_author as w_author, w.year as w_year, w.work_type as w_type, t.end_kind
-    from latest l
-    join dash_citation_facts f on f.practice_id = ${practice.id} and f.statement_id = l.statement_id
-    join top using (work_id)
-    join citations c on c.id = f.citation_id
-    join statements s on s.id = f.statement_id
-    join articles a on a.id = f.article_id
-    join works w on w.id = f.work_id
-    left join trails t on t.statement_id = f.statement_id and t.practice_id = ${practice.id}`.execute(db);
+      select f.statement_id, f.year from dash_citation_facts f join top using (work_id)
+      where f.practice_id = (select id from p) ${factWhere(f, "f")}
+      group by f.statement_id, f.year order by f.year desc, f.statement_id limit ${limits.statements}),
+    e as (
+      select f.statement_id, f.article_id, f.year, f.work_id, f.cited_article_id, c.locator, c.secondary, c.ordinal,
+        s.sentence, a.title, w.title as w_title, w.first_author as w_author, w.year as w_year, w.work_type as w_type, t.end_kind
+      from latest l
+      join dash_citation_facts f on f.practice_id = (select id from p) and f.statement_id = l.statement_id
+      join top using (work_id)
+      join citations c on c.id = f.citation_id
+      join statements s on s.id = f.statement_id
+      join articles a on a.id = f.article_id
+      join works w on w.id = f.work_id
+      left join trails t on t.statement_id = f.statement_id and t.practice_id = f.practice_id)
+    select (select row_to_json(p) from p) as practice,
+      coalesce((select json_agg(json_build_object('statement_id', statement_id, 'article_id', article_id, 'year', year, 'work_id', work_id,
+          'cited_article_id', cited_article_id, 'locator', locator, 'secondary', secondary, 'sentence', sentence, 'title', title,
+          'w_title', w_title, 'w_author', w_author, 'w_year', w_year, 'w_type', w_type, 'end_kind', end_kind)
+        order by year desc, statement_id, ordinal, work_id) from e), '[]') as rows`;
+}
+
+/**
+ * A practice's trails as one graph: the most cited works of the practice and the latest statements
+ * citing them (bounded, so the picture stays readable), with statements inside a cited article
+ * linked to that article's work.
+ */
+export async function practiceTrailView(db: DB, f: Filters, limits = { works: 15, statements: 60 }): Promise<TrailGraphView> {
+  const { practice, rows } = (await practiceTrailSql(f, limits).execute(db)).rows[0];
+  if (!practice) return { practice: null, nodes: [], edges: [], ...asTable([], []) };
+  const r = { rows };
   const nodes = new Map<string, GraphNode>();
   const edges: GraphEdge[] = [];
   const stmtsByArticle = new Map<string, string[]>();
@@ -143,11 +164,14 @@ export async function practiceTrailView(db: DB, f: Filters, limits = { works: 15
     if (!nodes.has(wid)) nodes.set(wid, { id: wid, kind: "work", label: short(x.w_title, x.w_author ?? "Untitled work"), year: Number.isFinite(y) ? y : null, href: `/works/${x.work_id}`, workType: x.w_type });
     edges.push({ id: `c${edges.length}`, from: sid, to: wid, kind: "cites", locator: x.locator, secondary: x.secondary, count: 1 });
   }
+  const seen = new Set<string>();
   for (const x of r.rows) {
     if (!x.cited_article_id) continue;
     for (const sid of stmtsByArticle.get(x.cited_article_id) ?? []) {
       const id = `a:${x.work_id}:${sid}`;
-      if (!edges.some((e) => e.id === id)) edges.push({ id, from: `work:${x.work_id}`, to: sid, kind: "asserted_in", locator: null, secondary: false, count: 1 });
+      if (seen.has(id)) continue;
+      seen.add(id);
+      edges.push({ id, from: `work:${x.work_id}`, to: sid, kind: "asserted_in", locator: null, secondary: false, count: 1 });
     }
   }
   const ns = [...nodes.values()];
