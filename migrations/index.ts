@@ -6,6 +6,7 @@ import * as people from "./20261201T0004_people";
 import * as dashboardSummaries from "./20261201T1834_dashboard_summaries";
 import * as uploadBatchMetadata from "./20261201T1842_upload_batch_metadata";
 import * as dashboardRollups from "./20261201T1901_dashboard_rollups";
+import * as dashboardFactCover from "./20261201T1906_dashboard_fact_cover";
 
 // Listed explicitly (no glob): the order here is the order they run. Append, never edit.
 export const migrations: Record<string, Migration> = {
@@ -16,4 +17,5 @@ export const migrations: Record<string, Migration> = {
   "20261201T1834_dashboard_summaries": dashboardSummaries,
   "20261201T1842_upload_batch_metadata": uploadBatchMetadata,
   "20261201T1901_dashboard_rollups": dashboardRollups,
+  "20261201T1906_dashboard_fact_cover": dashboardFactCover,
 };

@@ -2,23 +2,39 @@
  * npm run bench:dashboards — synthetic corpus of 100,000 articles, 2,000,000 statements and
  * 3,000,000 in-text citations generated straight into PostgreSQL (generate_series, in a database of
  * its own on the private test cluster), then:
- *   - trail building for every practice of the corpus (lib/graph/trails, the code the job runs);
- *   - each dashboard as an HTTP GET on loopback (the same lib/dashboards code the route handlers call,
- *     served by node:http so sign-in is not part of the figure) vs the same chart's SQL run directly;
+ *   - trail building for every practice of the corpus (lib/graph/trails, the code the job runs) and
+ *     the refresh of every dashboard view (lib/graph/summaries, the code the refresh job runs);
+ *   - each dashboard through the REAL route: the built Next app (`next start`, the env of
+ *     workers/stack.ts) signed in as a reader over HTTP, vs the chart's own SQL statement (the very
+ *     statement lib/dashboards sends, compiled by Kysely) run directly on a pg connection;
+ *   - the same lib code behind a bare node:http server (no Next, no sign-in), to show the overhead split;
+ *   - requests per second for the heaviest chart: 4 clients for 10 s on loopback;
  *   - the live SQL over the base tables, which is what the summary views replace.
- * BENCH_SCALE=0.1 makes a tenth-size run for a quick check.
+ * An already generated database is reused when its row counts match; --regenerate forces a new one.
+ * --skip-trails reuses the stored trails (quick re-runs of the timing part only).
+ * Run it under `flock /tmp/echoline-bench.lock`; the Next part takes /tmp/echoline-build.lock itself
+ * (it may rebuild .next and serves from it). BENCH_SCALE=0.1 makes a tenth-size run for a quick check.
  */
 import http from "node:http";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { spawn, type ChildProcess } from "node:child_process";
 import pg from "pg";
 import type { Kysely } from "kysely";
 import { sql } from "kysely";
-import { up, databaseUrl } from "@/db/cluster";
+import { up, databaseUrl, DATA_DIR } from "@/db/cluster";
 import { createDb, type DB } from "@/db";
 import { migrateToLatest } from "@/db/migrate";
 import { seedPractices } from "@/lib/graph/seed";
 import { rebuildPracticeTrails } from "@/lib/graph/trails";
 import { refreshSummaries } from "@/lib/graph/summaries";
-import { dashboardData, filtersSchema, isDashboardName } from "@/lib/dashboards";
+import { dashboardData, filtersSchema, isDashboardName, type DashboardName, type Filters } from "@/lib/dashboards";
+import { practiceOverTimeSql, trailEndsSql, venueComparisonSql } from "@/lib/dashboards/queries";
+import { practiceTrailSql } from "@/lib/dashboards/trail-view";
+import { driftSql } from "@/lib/dashboards/drift";
+import { hashPassword } from "@/lib/server/passwords";
+import { stackEnv, ROOT, waitForHttp } from "@/workers/stack";
 
 const SCALE = Number(process.env.BENCH_SCALE ?? 1);
 const ARTICLES = Math.round(100_000 * SCALE);
@@ -28,23 +44,58 @@ const REFS_PER_ARTICLE = 15;
 const OUTSIDE_WORKS = Math.round(20_000 * SCALE);
 const VENUES = 40;
 const PRACTICES_USED = 10;
-const REPEAT = Number(process.env.BENCH_REPEAT ?? 40);
-const NAME = "echoline_bench";
+const REPEAT = Number(process.env.BENCH_REPEAT ?? 60);
+const NAME = SCALE === 1 ? "echoline_bench" : `echoline_bench_${String(SCALE).replace(".", "_")}`;
+const APP_PORT = Number(process.env.BENCH_APP_PORT ?? 3300);
+const APP = `http://127.0.0.1:${APP_PORT}`;
+const REGENERATE = process.argv.includes("--regenerate");
+const SKIP_TRAILS = process.argv.includes("--skip-trails");
+const READER = { email: "bench-reader@example.invalid", password: "bench-reader-password-1" };
 
 const t0 = () => process.hrtime.bigint();
 const ms = (since: bigint) => Number(process.hrtime.bigint() - since) / 1e6;
 const log = (s: string) => console.error(`[bench] ${s}`);
+const load = () => os.loadavg().map((x) => x.toFixed(2)).join(" ");
 
-async function freshDatabase(): Promise<DB> {
+/** The bench database: reused when it holds the corpus this run would generate, else made anew. */
+async function openDatabase(): Promise<{ db: DB; generated: boolean }> {
   up("test");
   const admin = new pg.Client({ connectionString: databaseUrl("test", "postgres") });
   await admin.connect();
-  await admin.query(`drop database if exists ${NAME} with (force)`);
-  await admin.query(`create database ${NAME}`);
-  await admin.end();
-  const db = createDb(databaseUrl("test", NAME), 8);
+  const url = databaseUrl("test", NAME);
+  try {
+    const exists = (await admin.query("select 1 from pg_database where datname = $1", [NAME])).rowCount === 1;
+    if (exists && !REGENERATE) {
+      const c = new pg.Client({ connectionString: url });
+      await c.connect();
+      try {
+        const r = await c.query<{ a: string; s: string; c: string; p: string }>(
+          `select (select count(*) from articles) a, (select count(*) from statements) s, (select count(*) from citations) c,
+             (select count(*) from bench_practices) p`,
+        );
+        const got = r.rows[0];
+        const want = { a: ARTICLES, s: ARTICLES * STATEMENTS_PER_ARTICLE, c: ARTICLES * CITATIONS_PER_ARTICLE, p: PRACTICES_USED };
+        if (Number(got.a) === want.a && Number(got.s) === want.s && Number(got.c) === want.c && Number(got.p) === want.p) {
+          log(`reusing ${NAME} (${got.a} articles, ${got.s} statements, ${got.c} citations); --regenerate makes a new one`);
+          const db = createDb(url, 8);
+          await migrateToLatest(db as unknown as Kysely<unknown>);
+          return { db, generated: false };
+        }
+        log(`${NAME} holds other row counts (${JSON.stringify(got)}), regenerating`);
+      } catch (e) {
+        log(`${NAME} is not a complete bench database (${(e as Error).message}), regenerating`);
+      } finally {
+        await c.end();
+      }
+    }
+    await admin.query(`drop database if exists ${NAME} with (force)`);
+    await admin.query(`create database ${NAME}`);
+  } finally {
+    await admin.end();
+  }
+  const db = createDb(url, 8);
   await migrateToLatest(db as unknown as Kysely<unknown>);
-  return db;
+  return { db, generated: true };
 }
 
 async function generate(db: DB): Promise<void> {
@@ -113,7 +164,7 @@ function quantile(xs: number[], q: number): number {
 }
 
 async function time(n: number, fn: () => Promise<unknown>): Promise<{ p50: number; p95: number }> {
-  for (let i = 0; i < 3; i++) await fn(); // warm the cache and the plan
+  for (let i = 0; i < 5; i++) await fn(); // warm the cache, the plan and Next's route module
   const xs: number[] = [];
   for (let i = 0; i < n; i++) {
     const s = t0();
@@ -123,27 +174,118 @@ async function time(n: number, fn: () => Promise<unknown>): Promise<{ p50: numbe
   return { p50: quantile(xs, 0.5), p95: quantile(xs, 0.95) };
 }
 
+/** Newer sources than the last build mean .next would serve old code. */
+function buildIsStale(): boolean {
+  const id = path.join(ROOT, ".next", "BUILD_ID");
+  if (!fs.existsSync(id)) return true;
+  const built = fs.statSync(id).mtimeMs;
+  const dirs = ["lib/dashboards", "app/api/dashboards", "lib/server", "db", "lib/graph"];
+  const newer = (p: string): boolean => {
+    const st = fs.statSync(p);
+    if (st.isDirectory()) return fs.readdirSync(p).some((e) => newer(path.join(p, e)));
+    return st.mtimeMs > built;
+  };
+  return dirs.some((d) => fs.existsSync(path.join(ROOT, d)) && newer(path.join(ROOT, d)));
+}
+
+/**
+ * `next start` under the shared build lock (held while it serves, so nobody rebuilds .next under
+ * it), building first when the build is stale. Detached, so stopping kills the whole group.
+ */
+async function startNext(url: string): Promise<ChildProcess> {
+  const dataDir = path.join(DATA_DIR, "bench");
+  const env = stackEnv({ appPort: APP_PORT, smtpPort: 2725, mailHttpPort: 2726, databaseUrl: url, dataDir, quiet: true });
+  const stale = buildIsStale();
+  const next = path.join(ROOT, "node_modules", ".bin", "next");
+  const script = `${stale ? `"${next}" build >&2 && ` : ""}exec "${next}" start -H 127.0.0.1 -p ${APP_PORT}`;
+  log(stale ? "build is stale: next build, then next start (under /tmp/echoline-build.lock)" : "next start (under /tmp/echoline-build.lock)");
+  const child = spawn("flock", ["/tmp/echoline-build.lock", "sh", "-c", script], { cwd: ROOT, env, detached: true, stdio: ["ignore", "ignore", "pipe"] });
+  let err = "";
+  child.stderr?.on("data", (c: Buffer) => void (err = (err + c.toString()).slice(-4000)));
+  const exited = new Promise<never>((_, reject) => child.once("exit", (code) => reject(new Error(`next exited (${code}): ${err}`))));
+  await Promise.race([waitForHttp(`${APP}/sign-in`, 15 * 60_000), exited]);
+  return child;
+}
+
+function stopNext(child: ChildProcess): Promise<void> {
+  return new Promise((resolve) => {
+    if (child.exitCode !== null || child.signalCode !== null || !child.pid) return resolve();
+    child.once("exit", () => resolve());
+    process.kill(-child.pid, "SIGTERM");
+  });
+}
+
+const cookiesOf = (res: Response) => res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+
+/** A reader account in the bench database, signed in through next-auth's credentials callback. */
+async function readerCookie(db: DB): Promise<string> {
+  const hash = await hashPassword(READER.password);
+  // E-mails are unique case-insensitively (an expression index), so replace rather than upsert.
+  await db.deleteFrom("User").where(sql`lower(email)`, "=", READER.email).execute();
+  await db.insertInto("User").values({ email: READER.email, name: "Bench reader", role: "reader", password_hash: hash, emailVerified: null, image: null, deactivated_at: null }).execute();
+  const csrf = await fetch(`${APP}/api/auth/csrf`);
+  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+  const jar = cookiesOf(csrf);
+  const res = await fetch(`${APP}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: jar },
+    body: new URLSearchParams({ email: READER.email, password: READER.password, csrfToken, callbackUrl: `${APP}/home` }),
+  });
+  const all = [jar, cookiesOf(res)].filter(Boolean).join("; ");
+  if (!/authjs\.session-token=/.test(all)) throw new Error(`sign-in as the bench reader gave no session cookie (status ${res.status})`);
+  return all;
+}
+
+/** The chart's own statement, exactly as lib/dashboards sends it (one statement per chart). */
+const CHART_SQL: Record<DashboardName, (f: Filters) => { compile: (db: DB) => { sql: string; parameters: readonly unknown[] } }> = {
+  "practice-over-time": practiceOverTimeSql,
+  "trail-ends": trailEndsSql,
+  venues: venueComparisonSql,
+  "trail-graph": (f) => practiceTrailSql(f),
+  drift: driftSql,
+};
+
 async function main() {
   const total = t0();
-  const db = await freshDatabase();
-  await generate(db);
+  log(`load average at start: ${load()}`);
+  const { db, generated } = await openDatabase();
+  if (generated) await generate(db);
   const counts = await sql<{ a: number; s: number; c: number }>`select (select count(*) from articles) a, (select count(*) from statements) s, (select count(*) from citations) c`.execute(db);
   log(`corpus: ${JSON.stringify(counts.rows[0])}`);
 
-  const practices = await db.selectFrom("bench_practices" as never).select(["id" as never]).execute() as unknown as { id: string }[];
+  const practices = (await db.selectFrom("bench_practices" as never).select(["id" as never]).orderBy("idx" as never).execute()) as unknown as { id: string }[];
+  let trailLine = "Trail building skipped (--skip-trails): the stored trails were reused.";
+  if (!SKIP_TRAILS || generated) {
+    const s = t0();
+    let trails = 0;
+    for (const p of practices) trails += await rebuildPracticeTrails(db, p.id);
+    const secs = ms(s) / 1000;
+    trailLine = `Trail building, whole corpus (${trails} trails, ${practices.length} practices): ${secs.toFixed(1)} s (load ${load()}).`;
+    log(trailLine);
+  }
+  // The refresh job's own path: CONCURRENTLY once the views are populated, as in production.
+  const timings: Record<string, number> = {};
   let s = t0();
-  let trails = 0;
-  for (const p of practices) trails += await rebuildPracticeTrails(db, p.id);
-  const trailSeconds = ms(s) / 1000;
-  log(`trails: ${trails} built for ${practices.length} practices in ${trailSeconds.toFixed(1)} s`);
-  s = t0();
-  await refreshSummaries(db, { concurrently: false });
+  await refreshSummaries(db, { timings });
   const refreshSeconds = ms(s) / 1000;
-  log(`summary refresh: ${refreshSeconds.toFixed(1)} s`);
+  const refreshLine = `Summary refresh (concurrently, as the job runs it): ${refreshSeconds.toFixed(1)} s — ${Object.entries(timings).map(([v, x]) => `${v} ${x.toFixed(1)}`).join(", ")} (load ${load()}).`;
+  log(refreshLine);
   await sql`analyze`.execute(db);
 
   const practice = practices[0].id;
   const venues = await db.selectFrom("venues").select("id").orderBy("name").limit(3).execute();
+  const filtered = `practice=${practice}&venues=${venues.map((v) => v.id).join(",")}&from=2005&to=2020&framing=fixed`;
+  const cases: { name: DashboardName; label: string; query: string }[] = [];
+  for (const name of ["practice-over-time", "trail-ends", "venues", "trail-graph", "drift"] as const) {
+    cases.push({ name, label: "none", query: `practice=${practice}` });
+    cases.push({ name, label: "3 venues, 2005–2020, fixed", query: filtered });
+  }
+  // Year filter alone: the widest fallback of the top-works query (no roll-up can answer it).
+  cases.push({ name: "trail-ends", label: "2000–2024 only", query: `practice=${practice}&from=2000&to=2024` });
+  cases.push({ name: "trail-graph", label: "2000–2024 only", query: `practice=${practice}&from=2000&to=2024` });
+
+  // Lib code behind a bare node:http server: the route minus Next and sign-in.
   const server = http.createServer(async (req, res) => {
     const url = new URL(req.url ?? "/", "http://x");
     const name = url.pathname.split("/").pop();
@@ -156,46 +298,52 @@ async function main() {
     res.writeHead(200, { "content-type": "application/json" }).end(body);
   });
   await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
-  const port = (server.address() as { port: number }).port;
+  const libPort = (server.address() as { port: number }).port;
   const direct = new pg.Client({ connectionString: databaseUrl("test", NAME) });
   await direct.connect();
 
-  // The best hand-written SQL for each chart: the same aggregate over the summary views, one round trip.
-  const DIRECT: Record<string, string> = {
-    "practice-over-time": `select year, rank, count(*) from (select year, article_id, min(sourcing_rank) rank from dash_statement_facts where practice_id = $1 group by 1, 2) a group by 1, 2`,
-    "trail-ends": `select year, end_kind, count(*) from dash_statement_facts where practice_id = $1 group by 1, 2`,
-    venues: `select venue_id, count(distinct article_id) from dash_statement_facts where practice_id = $1 group by 1`,
-    "trail-graph": `select work_id, count(*) from dash_citation_facts where practice_id = $1 and work_id is not null group by 1 order by 2 desc limit 15`,
-    drift: `select f.statement_id from dash_citation_facts f join source_checks sc on sc.work_id = f.work_id and sc.practice_id = f.practice_id where f.practice_id = $1 limit 500`,
-  };
-  const LIVE: Record<string, string> = {
-    "practice-over-time": `select a.year, min(case s.sourcing when 'cited_with_locator' then 1 when 'cited_no_locator' then 2 when 'secondary_only' then 3 else 4 end), count(*) from statement_practices sp join statements s on s.id = sp.statement_id join articles a on a.id = s.article_id where sp.practice_id = $1 and a.status = 'done' and a.licence is not null group by a.year, a.id`,
-  };
+  const next = await startNext(databaseUrl("test", NAME));
   const rows: string[] = [];
-  const cases: { name: string; query: string }[] = [
-    { name: "practice-over-time", query: `practice=${practice}` },
-    { name: "practice-over-time", query: `practice=${practice}&venues=${venues.map((v) => v.id).join(",")}&from=2005&to=2020&framing=fixed` },
-    { name: "trail-ends", query: `practice=${practice}` },
-    { name: "venues", query: `practice=${practice}` },
-    { name: "trail-graph", query: `practice=${practice}` },
-    { name: "drift", query: `practice=${practice}` },
-  ];
-  rows.push("| dashboard route | filters | route p50 ms | route p95 ms | direct SQL p50 ms | direct SQL p95 ms | p95 ratio |");
-  rows.push("|---|---|---|---|---|---|---|");
-  for (const c of cases) {
-    const route = await time(REPEAT, async () => {
-      const r = await fetch(`http://127.0.0.1:${port}/api/dashboards/${c.name}?${c.query}`);
-      if (!r.ok) throw new Error(`${c.name}: HTTP ${r.status}`);
+  try {
+    const cookie = await readerCookie(db);
+    const get = async (base: string, c: { name: string; query: string }, headers: Record<string, string> = {}) => {
+      const r = await fetch(`${base}/api/dashboards/${c.name}?${c.query}`, { headers });
+      if (!r.ok) throw new Error(`${c.name}: HTTP ${r.status} ${await r.text()}`);
       await r.arrayBuffer();
-    });
-    const d = await time(REPEAT, () => direct.query(DIRECT[c.name], [practice]));
-    rows.push(`| ${c.name} | ${c.query.includes("venues") ? "3 venues, 2005–2020, fixed" : "none"} | ${route.p50.toFixed(1)} | ${route.p95.toFixed(1)} | ${d.p50.toFixed(1)} | ${d.p95.toFixed(1)} | ${(route.p95 / d.p95).toFixed(2)} |`);
-    log(rows[rows.length - 1]);
+    };
+    log(`timing ${cases.length} cases × ${REPEAT} requests, load ${load()}`);
+    rows.push("| dashboard route | filters | Next route p50 ms | Next route p95 ms | lib via node:http p95 ms | direct SQL p50 ms | direct SQL p95 ms | p95 ratio (Next / SQL) | load avg |");
+    rows.push("|---|---|---|---|---|---|---|---|---|");
+    const heaviest = { p95: 0, c: cases[0] };
+    for (const c of cases) {
+      const f = filtersSchema.parse(Object.fromEntries(new URLSearchParams(c.query)));
+      const q = CHART_SQL[c.name](f).compile(db);
+      const viaNext = await time(REPEAT, () => get(APP, c, { cookie }));
+      const viaLib = await time(REPEAT, () => get(`http://127.0.0.1:${libPort}`, c));
+      const d = await time(REPEAT, () => direct.query(q.sql, q.parameters as unknown[]));
+      if (viaNext.p95 > heaviest.p95) Object.assign(heaviest, { p95: viaNext.p95, c });
+      rows.push(`| ${c.name} | ${c.label} | ${viaNext.p50.toFixed(1)} | ${viaNext.p95.toFixed(1)} | ${viaLib.p95.toFixed(1)} | ${d.p50.toFixed(1)} | ${d.p95.toFixed(1)} | ${(viaNext.p95 / d.p95).toFixed(2)} | ${load()} |`);
+      log(rows[rows.length - 1]);
+    }
+    // Throughput of the heaviest chart through Next: 4 clients back to back for 10 s, loopback only.
+    const until = Date.now() + 10_000;
+    let done = 0;
+    await Promise.all(Array.from({ length: 4 }, async () => {
+      while (Date.now() < until) {
+        await get(APP, heaviest.c, { cookie });
+        done++;
+      }
+    }));
+    rows.push(`\nThroughput, ${heaviest.c.name} (${heaviest.c.label}) through Next, 4 clients for 10 s: ${(done / 10).toFixed(0)} requests/s (load ${load()}).`);
+  } finally {
+    await stopNext(next);
   }
-  const live = await time(5, () => direct.query(LIVE["practice-over-time"], [practice]));
-  rows.push(`\nLive join over the base tables for practice-over-time (what the summary views replace): p50 ${live.p50.toFixed(0)} ms, p95 ${live.p95.toFixed(0)} ms.`);
-  rows.push(`Trail building, whole corpus (${trails} trails, ${practices.length} practices): ${trailSeconds.toFixed(1)} s. Summary refresh: ${refreshSeconds.toFixed(1)} s.`);
-  rows.push(`Corpus: ${counts.rows[0].a} articles, ${counts.rows[0].s} statements, ${counts.rows[0].c} citations. Total bench time ${(ms(total) / 1000 / 60).toFixed(1)} min.`);
+  const LIVE = `select a.year, min(case s.sourcing when 'cited_with_locator' then 1 when 'cited_no_locator' then 2 when 'secondary_only' then 3 else 4 end), count(*) from statement_practices sp join statements s on s.id = sp.statement_id join articles a on a.id = s.article_id where sp.practice_id = $1 and a.status = 'done' and a.licence is not null group by a.year, a.id`;
+  const live = await time(5, () => direct.query(LIVE, [practice]));
+  rows.push(`Live join over the base tables for practice-over-time (what the summary views replace): p50 ${live.p50.toFixed(0)} ms, p95 ${live.p95.toFixed(0)} ms.`);
+  rows.push(trailLine);
+  rows.push(refreshLine);
+  rows.push(`Corpus: ${counts.rows[0].a} articles, ${counts.rows[0].s} statements, ${counts.rows[0].c} citations. Total bench time ${(ms(total) / 1000 / 60).toFixed(1)} min. Load average at the end: ${load()} on ${os.cpus().length} cores.`);
   console.log(rows.join("\n"));
   await direct.end();
   server.close();
