@@ -135,6 +135,55 @@ describe("dashboards equal a hand count", () => {
   });
 });
 
+describe("dashboards read the roll-ups and still equal a hand count under every filter", () => {
+  it("a framing no fixture statement has leaves the eligible articles and asserts nothing", async () => {
+    // Every fixture statement is framed "fixed", so under "contextual": articles as before
+    // (2010: 1, 2018: 1, 2019: 3), none asserting; no trail ends, no sources; no venue citations.
+    const pot = await dashboardData(db, "practice-over-time", { practice: alpha, framing: "contextual" });
+    expect(pot.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting])).toEqual([[2010, 1, 0], [2018, 1, 0], [2019, 3, 0]]);
+    const te = await dashboardData(db, "trail-ends", { practice: alpha, framing: "contextual" });
+    expect(te.tables.ends.rows).toEqual([]);
+    expect(te.tables.sources.rows).toEqual([]);
+    const v = await dashboardData(db, "venues", { practice: alpha, framing: "contextual" });
+    const by = Object.fromEntries(v.tables.venues.rows.map((r) => [r.venue_id, r]));
+    expect(by[ids.venues.methods]).toMatchObject({ articles: 2, asserting: 0, citations: 0, in_venue: 0 });
+    expect(by[ids.venues.applied]).toMatchObject({ articles: 3, asserting: 0, citations: 0, in_venue: 0 });
+  });
+  it("the framing every statement has gives the unfiltered hand counts", async () => {
+    const te = await dashboardData(db, "trail-ends", { practice: alpha, framing: "fixed" });
+    expect(te.tables.ends.rows.map((r) => [r.year, r.statements, r.methods_source, r.no_citation])).toEqual([[2010, 1, 1, 0], [2018, 1, 1, 0], [2019, 2, 1, 1]]);
+    expect(te.tables.sources.rows).toHaveLength(3);
+    const v = await dashboardData(db, "venues", { practice: alpha, framing: "fixed" });
+    const by = Object.fromEntries(v.tables.venues.rows.map((r) => [r.venue_id, r]));
+    expect(by[ids.venues.applied]).toMatchObject({ articles: 3, asserting: 3, citations: 2, in_venue: 1 });
+  });
+  it("most cited sources: the per-work roll-up (no filter) and the fact-view count (a year filter covering all years) agree", async () => {
+    // Hand count: three works cited once each, one with a locator (M by A1, "p. 12").
+    const fast = await dashboardData(db, "trail-ends", { practice: alpha });
+    const slow = await dashboardData(db, "trail-ends", { practice: alpha, from: 1900, to: 2100 });
+    expect(slow.tables.sources.rows).toEqual(fast.tables.sources.rows);
+    expect(fast.tables.sources.rows.map((r) => [r.citations, r.with_locator]).sort()).toEqual([[1, 0], [1, 0], [1, 1]]);
+    const g1 = await dashboardData(db, "trail-graph", { practice: alpha });
+    const g2 = await dashboardData(db, "trail-graph", { practice: alpha, from: 1900, to: 2100 });
+    expect(g2.tables.edges.rows).toEqual(g1.tables.edges.rows);
+    // Cites edges: M→book, A1→M (p. 12), A2→A1; asserted_in edges link M's work to M.0 and A1's work to A1.0.
+    expect(g1.tables.edges.rows.filter((r) => r.kind === "cites")).toHaveLength(3);
+    expect(g1.tables.edges.rows.filter((r) => r.kind === "asserted_in")).toHaveLength(2);
+  });
+  it("a year window keeps only its articles (2018 only: A1, asserting with a locator)", async () => {
+    const pot = await dashboardData(db, "practice-over-time", { practice: alpha, from: 2018, to: 2018 });
+    expect(pot.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting, r.cited_with_locator])).toEqual([[2018, 1, 1, 1]]);
+    const te = await dashboardData(db, "trail-ends", { practice: alpha, from: 2018, to: 2018 });
+    expect(te.tables.sources.rows.map((r) => [r.citations, r.with_locator])).toEqual([[1, 1]]);
+  });
+  it("a statistic filter that contradicts the practice asked for gives way to the statistic", async () => {
+    const d = await dashboardData(db, "practice-over-time", { practice: alpha, statistic: "rmsea" });
+    expect(d.practice?.statistic).toBe("rmsea");
+    const same = await dashboardData(db, "practice-over-time", { practice: alpha, statistic: "cronbach_alpha" });
+    expect(same.practice?.id).toBe(alpha);
+  });
+});
+
 describe("curator merge and split", () => {
   it("merging moves references and the graph follows; splitting undoes it", async () => {
     const a = await db.insertInto("works").values({ doi: null, title: "Invented duplicate", normalised_title: null, first_author: "x", year: "2001", article_id: null, merged_into: null }).returning("id").executeTakeFirstOrThrow();
