@@ -7,7 +7,10 @@ import type { JobDefinition } from "./job-types";
  * claims each job with SKIP LOCKED, so a job runs in one process at a time.
  */
 export function createWorkerBoss(connectionString: string): PgBoss {
-  const boss = new PgBoss({ connectionString, max: 4, useListenNotify: true, application_name: "echoline-worker" });
+  // Plain polling (every second, see workers/index.ts), not LISTEN/NOTIFY: jobs are sent through a
+  // Kysely transaction by a sender that cannot notify, and a notify-enabled queue then falls back
+  // to a slow backstop poll (measured: ~25 s between jobs).
+  const boss = new PgBoss({ connectionString, max: 4, application_name: "echoline-worker" });
   boss.on("error", (err: Error) => console.error("[worker] pg-boss error:", err.message));
   boss.on("warning", (w: { message: string }) => {
     // Node 20 runs pg-boss fine although its package asks for 22; that warning is noise here.

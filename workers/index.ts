@@ -24,14 +24,17 @@ const { mining, all } = buildJobs({
 });
 
 await ensureMiningQueue(boss);
-for (const job of all) {
+// ECHOLINE_WORKER_QUEUES=a,b runs only those queues (dedicated mining machines; the benchmark).
+const only = process.env.ECHOLINE_WORKER_QUEUES?.split(",").map((s) => s.trim()).filter(Boolean);
+const selected = only?.length ? all.filter((j) => only.includes(j.name)) : all;
+for (const job of selected) {
   if (job.name !== MINING_QUEUE) await ensureQueue(boss, job);
   await boss.work(job.name, { localConcurrency: job.concurrency ?? 1, pollingIntervalSeconds: 1 }, async (jobs: Job<object>[]) => {
     await job.handler(jobs);
   });
   if (job.cron) await boss.schedule(job.name, job.cron, null, { ...job.preset });
 }
-console.log(`[worker] ready (pid ${process.pid}): ${all.map((j) => j.name).join(", ")}`);
+console.log(`[worker] ready (pid ${process.pid}): ${selected.map((j) => j.name).join(", ")}`);
 
 let stopping = false;
 async function shutdown(signal: string) {

@@ -23,8 +23,6 @@ export function bossDb(db: Executor) {
 }
 
 export const miningQueueOptions = {
-  // Workers listening for NOTIFY pick a new upload up at once instead of at their next poll.
-  notify: true,
   retryLimit: RETRY.mining.retryLimit,
   retryDelay: RETRY.mining.retryDelay,
   retryBackoff: RETRY.mining.retryBackoff,
