@@ -72,7 +72,7 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
               <h3 className="font-semibold">{SECTION_LABEL[g.section]}</h3>
               <ul className="grid gap-4">
                 {g.items.map((s) => (
-                  <li key={s.id} className="grid gap-1 border-l-2 border-rule pl-3" data-testid="statement">
+                  <li key={s.id} id={`statement-${s.id}`} className="grid gap-1 border-l-2 border-rule pl-3 scroll-mt-4 target:border-accent target:bg-paper-2" data-testid="statement">
                     <Evidence sentence={s.sentence} value={s.value} citations={s.citations} />
                     <div className="flex flex-wrap items-center gap-3 text-sm text-ink-2">
                       <SourcingBadge sourcing={s.sourcing} />
