@@ -1,6 +1,7 @@
 import { cache } from "react";
 import { redirect, forbidden as nextForbidden } from "next/navigation";
 import { auth } from "./auth";
+import { sql } from "kysely";
 import { getDb } from "@/db";
 import { can, type Actor, type Permission } from "@/lib/auth/permissions";
 
@@ -12,15 +13,25 @@ export const getActor = cache(async (): Promise<Actor | null> => {
   const session = await auth();
   const id = session?.user?.id;
   if (!id) return null;
-  const db = getDb();
-  const user = await db
+  // One round trip: the person and their venues together (this runs on every request).
+  const user = await getDb()
     .selectFrom("User")
-    .select(["id", "email", "name", "role", "deactivated_at"])
-    .where("id", "=", id)
+    .select((eb) => [
+      "User.id",
+      "User.email",
+      "User.name",
+      "User.role",
+      "User.deactivated_at",
+      eb
+        .selectFrom("editor_venues")
+        .select(sql<string[]>`coalesce(array_agg(venue_id::text), '{}')`.as("ids"))
+        .whereRef("editor_venues.user_id", "=", "User.id")
+        .as("venue_ids"),
+    ])
+    .where("User.id", "=", id)
     .executeTakeFirst();
   if (!user || user.deactivated_at) return null;
-  const venues = await db.selectFrom("editor_venues").select("venue_id").where("user_id", "=", id).execute();
-  return { id: user.id, email: user.email, name: user.name, role: user.role, venueIds: venues.map((v) => v.venue_id) };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, venueIds: user.venue_ids ?? [] };
 });
 
 /** For pages: anonymous → sign-in page; signed in without the permission → 403 page. */

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, signInAs, APP_URL, demoAccount } from "../helpers/browser";
 import type { Role } from "@/db/schema/accounts";
+import { DEMO_VENUES } from "@/lib/demo/corpus";
 
 // What each role must see in the main navigation (written out here, not derived from the app's map).
 const EXPECTED_NAV: Record<Role, string[]> = {
@@ -33,6 +34,14 @@ describe("sign-in through the real UI", () => {
       await b.page.waitForURL(`${APP_URL}/`);
     });
   }
+
+  it("shows an editor the venues they are linked to", async () => {
+    await signInAs(b.page, "editor");
+    // The seed links the demo editor to the first empirical demo venue.
+    const first = DEMO_VENUES.find((v) => !v.isMethodsVenue)!;
+    await b.page.getByRole("heading", { name: "Your venues" }).waitFor();
+    await expect(b.page.getByText(first.name).isVisible()).resolves.toBe(true);
+  });
 
   it("gives the same answer for a wrong password and an unknown e-mail", async () => {
     await b.context.clearCookies();
