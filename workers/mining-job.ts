@@ -4,7 +4,7 @@
  * only trouble on our side (database, storage) is retried, and the last try marks the article failed.
  */
 import { sql, type Transaction } from "kysely";
-import type { Job, PgBoss } from "pg-boss";
+import type { Job, JobResult, PgBoss } from "pg-boss";
 import { z } from "zod";
 import type { Database, DB } from "@/db";
 import type { FileStorage } from "@/lib/storage";
@@ -41,6 +41,8 @@ export type MiningDeps = {
 export type MiningJob = JobDefinition<MiningJobData> & {
   /** Mines one article; resolves when it is done or failed, rejects only for a retryable error. */
   run(articleId: string, retryCount?: number): Promise<"done" | "failed" | "missing">;
+  /** Settles each job of a batch on its own (pg-boss `perJobResults`): one retry never re-mines the others. */
+  handleEach(jobs: Job<MiningJobData>[]): Promise<JobResult[]>;
   close(): Promise<void>;
 };
 
@@ -199,6 +201,18 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
         }
       }
       if (errors.length) throw errors[0];
+    },
+    handleEach: async (jobs) => {
+      const out: JobResult[] = [];
+      for (const job of jobs) {
+        try {
+          await handleOne(job);
+          out.push({ id: job.id, status: "completed" });
+        } catch {
+          out.push({ id: job.id, status: "failed" });
+        }
+      }
+      return out;
     },
     run: async (articleId) => run(articleId),
     close: async () => {
