@@ -112,13 +112,16 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
       flat += `${c.text.replace(/\s+/g, " ").trim()} `;
     }
     let cursor = 0;
+    // Sentences come in text order, so the page lookup walks forward with them (a scan of every
+    // line start per sentence was quadratic in the length of a section).
+    let si = 0;
     let previousStatistic: ReturnType<typeof lastStatistic> = null;
     for (const sentence of splitSentences(flat)) {
       const at = flat.indexOf(sentence.slice(0, 20), cursor);
       const pos = at >= 0 ? at : cursor;
       cursor = at >= 0 ? at + sentence.length : cursor;
-      let page = starts[0].page;
-      for (const s of starts) if (s.at <= pos) page = s.page;
+      while (si + 1 < starts.length && starts[si + 1].at <= pos) si++;
+      const page = starts[si].page;
       const cites = findCitations(sentence, numbered);
       for (const c of cites) citations.push({ ...c, page, sentence });
       const stripped = stripCitations(sentence);

@@ -38,11 +38,37 @@ function mask(text: string): string {
 
 const tokenizer = new SentenceTokenizer([], true);
 
+// natural's tokenize() is quadratic in its input: for every sentence it finds it builds one RegExp per
+// placeholder of the whole input (revertReplacements / revertDelimiters), so a 300-page discussion
+// section took minutes (measured: 9 s for 74 pages, 34 s for 149). Here it does not serve as is, so it
+// only ever gets short pieces, cut where it would cut anyway: at a space that follows a sentence
+// delimiter (. ? ! …) and precedes a character that cannot continue a delimiter run. Its delimiter
+// pattern ([.?!… ]*)([.?!…])(["'”’)}\]]?) cannot match across such a space, and its URI and number
+// placeholders never contain a space, so the pieces' sentences are exactly those of the whole text
+// (tests/unit/mining/sentences-scale.test.ts checks this against natural on the whole text).
+const PIECE_CHARS = 600;
+const SAFE_CUT = /[.?!…] (?=[^.?!… ])/g;
+
+function tokenizeInPieces(masked: string): string[] {
+  if (masked.length <= PIECE_CHARS) return tokenizer.tokenize(masked);
+  const out: string[] = [];
+  let from = 0;
+  SAFE_CUT.lastIndex = PIECE_CHARS;
+  for (let m = SAFE_CUT.exec(masked); m; m = SAFE_CUT.exec(masked)) {
+    const cut = m.index + 1;
+    for (const s of tokenizer.tokenize(masked.slice(from, cut))) out.push(s);
+    from = cut;
+    SAFE_CUT.lastIndex = cut + PIECE_CHARS;
+  }
+  for (const s of tokenizer.tokenize(masked.slice(from))) out.push(s);
+  return out;
+}
+
 export function splitSentences(text: string): string[] {
   const flat = text.replace(/\s+/g, " ").trim();
   if (!flat) return [];
   const masked = mask(flat);
-  const raw = tokenizer.tokenize(masked);
+  const raw = tokenizeInPieces(masked);
   const out: string[] = [];
   for (const s of raw) {
     const restored = s.replaceAll(DOT, ".").trim();
