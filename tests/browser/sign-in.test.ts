@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, signInAs, APP_URL, demoAccount } from "../helpers/browser";
+import { launchBrowser, signInAs, APP_URL, demoAccount, E2E_DATABASE_URL } from "../helpers/browser";
+import { createDb } from "@/db";
+import { hashPassword } from "@/lib/server/passwords";
 import type { Role } from "@/db/schema/accounts";
 import { DEMO_VENUES } from "@/lib/demo/corpus";
 
@@ -70,7 +72,11 @@ describe("sign-in through the real UI", () => {
   });
 
   it("rate-limits repeated wrong passwords for one account", async () => {
-    const email = demoAccount("instructor").email;
+    // An account of this test's own, so the lock-out does not spill into other suites.
+    const email = "locked.out@echoline.local";
+    const db = createDb(E2E_DATABASE_URL, 1);
+    await db.insertInto("User").values({ email, name: "Lock-out Test", role: "reader", password_hash: await hashPassword("the-right-password"), emailVerified: null, image: null, deactivated_at: null }).onConflict((oc) => oc.doNothing()).execute();
+    await db.destroy();
     let last = "";
     for (let i = 0; i < 7; i++) {
       await b.page.goto(`${APP_URL}/sign-in`);
@@ -82,6 +88,13 @@ describe("sign-in through the real UI", () => {
       last = (await alert.textContent()) ?? "";
     }
     expect(last).toMatch(/Too many attempts/);
+    // Locked out even with the right password, until the window passes.
+    await b.page.getByLabel("Password", { exact: true }).fill("the-right-password");
+    const answered = b.page.waitForResponse((r) => r.url().includes("/api/auth/callback/credentials"));
+    await b.page.getByRole("button", { name: "Sign in", exact: true }).click();
+    await answered;
+    await b.page.getByRole("alert").filter({ hasText: /Too many attempts/ }).waitFor();
+    expect(new URL(b.page.url()).pathname).toBe("/sign-in");
   });
 
   it("sends anonymous visitors of a signed-in page to sign-in", async () => {
