@@ -75,7 +75,8 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
                   <li key={s.id} id={`statement-${s.id}`} className="grid gap-1 border-l-2 border-rule pl-3 scroll-mt-4 target:border-accent target:bg-paper-2" data-testid="statement">
                     <Evidence sentence={s.sentence} value={s.value} citations={s.citations} />
                     <div className="flex flex-wrap items-center gap-3 text-sm text-ink-2">
-                      <SourcingBadge sourcing={s.sourcing} />
+                      {/* Sourcing is about cut-off claims; an obtained value needs no source. */}
+                      {s.kind === "threshold" && <SourcingBadge sourcing={s.sourcing} />}
                       <span>{s.kind}</span>
                       {s.statistic && <span>{s.statistic}</span>}
                       {s.comparator && s.value !== null && <span className="tabular-nums">{s.comparator} {s.value}</span>}
