@@ -11,13 +11,13 @@ export default async function PracticeTrailsPage({ searchParams }: { searchParam
   const search = new URLSearchParams(await searchParams).toString();
   const venues = await venueOptions(getDb());
   return (
-    <main className="mx-auto max-w-6xl space-y-4 p-6">
-      <h1 className="text-2xl font-semibold">Trail graph of a practice</h1>
+    <div className="space-y-4">
+      <h1 className="font-serif text-3xl font-semibold">Trail graph of a practice</h1>
       <DashboardTabs current="trail-graph" search={search} />
       <Suspense fallback={<p role="status">Loading…</p>}>
         <FiltersBar venues={venues} />
         <DashboardView name="trail-graph" />
       </Suspense>
-    </main>
+    </div>
   );
 }

@@ -9,8 +9,8 @@ export default async function WorksPage({ searchParams }: { searchParams: Promis
   const { q } = await searchParams;
   const works = await listWorks(getDb(), { q: q?.slice(0, 200) });
   return (
-    <main className="mx-auto max-w-5xl space-y-4 p-6">
-      <h1 className="text-2xl font-semibold">Works</h1>
+    <div className="space-y-4">
+      <h1 className="font-serif text-3xl font-semibold">Works</h1>
       <form><label>Search title or first author <input name="q" defaultValue={q} className="rounded border border-rule bg-paper px-2" /></label> <button className="rounded border border-ink px-2">Search</button></form>
       {works.length === 0 ? (
         <EmptyState title="No works yet" action={{ href: "/dashboards", label: "Open the dashboards" }}>Works appear once mined articles&apos; references are resolved.</EmptyState>
@@ -27,6 +27,6 @@ export default async function WorksPage({ searchParams }: { searchParams: Promis
           </tbody>
         </table>
       )}
-    </main>
+    </div>
   );
 }

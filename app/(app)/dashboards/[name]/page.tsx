@@ -15,14 +15,14 @@ export default async function DashboardPage({ params, searchParams }: { params: 
   const search = new URLSearchParams(await searchParams).toString();
   const venues = await venueOptions(getDb());
   return (
-    <main className="mx-auto max-w-6xl space-y-4 p-6">
-      <h1 className="text-2xl font-semibold">{tab.label}</h1>
+    <div className="space-y-4">
+      <h1 className="font-serif text-3xl font-semibold">{tab.label}</h1>
       <DashboardTabs current={tab.name} search={search} />
       <p className="text-sm text-ink-2">These figures report practice; they do not set standards. Flags are screening aids: read the article before acting on one.</p>
       <Suspense fallback={<p role="status">Loading filters…</p>}>
         <FiltersBar venues={venues} />
         <DashboardView name={tab.name} />
       </Suspense>
-    </main>
+    </div>
   );
 }

@@ -10,10 +10,10 @@ export default async function StatementTrailPage({ params, searchParams }: { par
   if (!z.uuid().safeParse(statementId).success) notFound();
   const { practice } = await searchParams;
   return (
-    <main className="mx-auto max-w-6xl space-y-4 p-6">
-      <h1 className="text-2xl font-semibold">Trail of one statement</h1>
+    <div className="space-y-4">
+      <h1 className="font-serif text-3xl font-semibold">Trail of one statement</h1>
       <Link href={`/trails${practice ? `?practice=${practice}` : ""}`} className="underline">Back to the practice&apos;s trail graph</Link>
       <StatementTrail statementId={statementId} practiceId={z.uuid().safeParse(practice).success ? practice : undefined} />
-    </main>
+    </div>
   );
 }

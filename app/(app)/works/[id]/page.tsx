@@ -19,8 +19,8 @@ export default async function WorkPage({ params }: { params: Promise<{ id: strin
   const curator = can(actor, "corpus:curate");
   const practices = curator ? await db.selectFrom("practices").select(["id", "label"]).orderBy("label").execute() : [];
   return (
-    <main className="mx-auto max-w-5xl space-y-4 p-6">
-      <h1 className="text-2xl font-semibold">{d.work.title ?? d.work.first_author ?? "Untitled work"}</h1>
+    <div className="space-y-4">
+      <h1 className="font-serif text-3xl font-semibold">{d.work.title ?? d.work.first_author ?? "Untitled work"}</h1>
       <p className="text-ink-2">{d.work.year ?? "n.d."} · {d.work.work_type.replace("_", " ")} (decided by {d.work.type_decided_by}) {d.work.doi && <>· DOI {d.work.doi}</>}</p>
       {d.article && <p>In the corpus: <Link className="underline" href={`/articles/${d.article.id}`}>{d.article.title}</Link></p>}
       <section>
@@ -35,6 +35,6 @@ export default async function WorkPage({ params }: { params: Promise<{ id: strin
         <ul className="text-sm">{d.references.map((r) => <li key={r.id}><Link className="underline" href={`/articles/${r.article_id}`}>{r.article_title ?? "Untitled"}</Link> ({r.year ?? "n.d."}): {r.citations} in-text citations, {r.with_locator} with a page</li>)}</ul>
       </section>
       {curator && <CurateWork workId={d.work.id} references={d.references.map((r) => ({ id: r.id, raw: r.raw }))} />}
-    </main>
+    </div>
   );
 }
