@@ -4,22 +4,27 @@
  * only trouble on our side (database, storage) is retried, and the last try marks the article failed.
  */
 import { sql, type Transaction } from "kysely";
-import type { Job, JobResult, PgBoss } from "pg-boss";
+import type { Job, JobResult, JobWithMetadata, PgBoss } from "pg-boss";
 import { z } from "zod";
 import type { Database, DB } from "@/db";
 import type { FileStorage } from "@/lib/storage";
 import { SuccessLine, ErrorLine } from "@/lib/mining/contract";
 import type { ProcedurePattern } from "@/lib/mining/procedures";
 import { MINING_QUEUE, type MiningJobData } from "@/lib/corpus/queue";
+import type { ArticleStatus } from "@/db/schema/corpus";
 import { recordEvent } from "@/lib/corpus/events";
 import { replaceMinedRows } from "@/lib/corpus/store-mined";
 import { enabledProcedures } from "@/lib/corpus/procedures-store";
 import { documentMetaUpdate } from "@/lib/metadata/document";
 import { applyBatchMetadataByDoi } from "@/lib/corpus/batches";
 import { onArticleMined } from "./graph-jobs";
-import { RETRY, type JobDefinition } from "./job-types";
+import { miningPreset, type JobDefinition, type RetryPreset } from "./job-types";
 
-/** What the worker needs of the extractor (lib/mining's createMiner returns this). */
+/**
+ * What the worker needs of the extractor (lib/mining's createMiner and createIsolatedMiner return
+ * this). mine() may take the input buffer over (the isolated miner transfers it to its thread), so
+ * the caller must not use `data` afterwards.
+ */
 export type MinerLike = {
   mine(input: { data: Uint8Array; filename: string }): Promise<{ line: unknown; timings?: { readMs: number; mineMs: number }; meta?: unknown }>;
   close(): Promise<void> | void;
@@ -34,6 +39,10 @@ export type MiningDeps = {
   /** Called after the rows are written and before commit; tests inject a failure here. */
   beforeCommit?: (trx: Transaction<Database>, articleId: string) => Promise<void>;
   log?: Pick<Console, "info" | "error" | "warn">;
+  /** Retry preset of the mining queue; default miningPreset(). Must match the queue's settings. */
+  retry?: RetryPreset;
+  /** Test hook: runs after the article is marked `reading`, before the file is read. */
+  afterReading?: (articleId: string) => Promise<void>;
   /** Timings per mined article, for the benchmark. */
   onMined?: (t: { articleId: string; pages: number; readMs: number; mineMs: number; storeMs: number }) => void;
 };
@@ -43,6 +52,11 @@ export type MiningJob = JobDefinition<MiningJobData> & {
   run(articleId: string, retryCount?: number): Promise<"done" | "failed" | "missing">;
   /** Settles each job of a batch on its own (pg-boss `perJobResults`): one retry never re-mines the others. */
   handleEach(jobs: Job<MiningJobData>[]): Promise<JobResult[]>;
+  /**
+   * Handler of the dead-letter queue (work with `includeMetadata`): a job whose tries all stopped
+   * without an outcome (worker crashed, claim expired) marks its article failed. Throws to retry.
+   */
+  handleStopped(jobs: JobWithMetadata<MiningJobData>[]): Promise<void>;
   close(): Promise<void>;
 };
 
@@ -51,17 +65,30 @@ class Retryable extends Error {}
 export function createMiningJob(deps: MiningDeps): MiningJob {
   const log = deps.log ?? console;
   const { db } = deps;
-  // One warm miner per process, rebuilt only when curators change the enabled procedure list.
-  let miner: { key: string; miner: MinerLike } | null = null;
-  async function currentMiner(): Promise<MinerLike> {
+  const retry = deps.retry ?? miningPreset();
+  // One warm miner per process, rebuilt only when curators change the enabled procedure list. A
+  // replaced miner is closed once no job of this process still uses it: closing it under a job
+  // that is about to mine would fail that article with "the miner was closed".
+  type Held = { key: string; miner: MinerLike; users: number; retired: boolean };
+  let miner: Held | null = null;
+  const retire = async (h: Held) => {
+    h.retired = true;
+    if (h.users === 0) await h.miner.close();
+  };
+  async function acquireMiner(): Promise<Held> {
     const procedures = await enabledProcedures(db);
     const key = JSON.stringify(procedures);
     if (!miner || miner.key !== key) {
       const old = miner;
-      miner = { key, miner: deps.createMiner({ procedures }) };
-      if (old) await old.miner.close();
+      miner = { key, miner: deps.createMiner({ procedures }), users: 0, retired: false };
+      if (old) void retire(old).catch((err) => log.error("[mining] closing the replaced miner failed:", (err as Error).message));
     }
-    return miner.miner;
+    miner.users++;
+    return miner;
+  }
+  async function releaseMiner(h: Held) {
+    h.users--;
+    if (h.retired && h.users === 0) await h.miner.close();
   }
 
   async function setStatus(articleId: string, status: "reading" | "mining" | "queued", message: string | null = null) {
@@ -71,9 +98,14 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     });
   }
 
-  async function fail(articleId: string, code: string, message: string) {
+  /** Marks the article failed; with `onlyIf`, only while its status is one of those (returns whether it did). */
+  async function fail(articleId: string, code: string, message: string, onlyIf?: ArticleStatus[]): Promise<boolean> {
     // A failed article has no mined rows: a re-mine that fails must not leave the old run behind.
-    await db.transaction().execute(async (trx) => {
+    return db.transaction().execute(async (trx) => {
+      if (onlyIf) {
+        const a = await trx.selectFrom("articles").select("status").where("id", "=", articleId).forUpdate().executeTakeFirst();
+        if (!a || !onlyIf.includes(a.status)) return false;
+      }
       await trx.deleteFrom("statements").where("article_id", "=", articleId).execute();
       await trx.deleteFrom("citations").where("article_id", "=", articleId).execute();
       await trx.deleteFrom("references").where("article_id", "=", articleId).execute();
@@ -83,6 +115,7 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
         .where("id", "=", articleId)
         .execute();
       await recordEvent(trx, articleId, "failed", `${code}: ${message}`);
+      return true;
     });
   }
 
@@ -95,22 +128,25 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
       .executeTakeFirst();
     if (!article) return "missing";
     await setStatus(articleId, "reading");
+    if (deps.afterReading) await deps.afterReading(articleId);
     let data: Uint8Array;
     try {
       data = await deps.storage.get(article.storage_key);
     } catch (err) {
       throw new Retryable(`The stored file could not be read: ${(err as Error).message}`);
     }
-    const m = await currentMiner();
+    const held = await acquireMiner();
     let result: Awaited<ReturnType<MinerLike["mine"]>>;
     try {
-      result = await m.mine({ data, filename: article.original_filename });
+      result = await held.miner.mine({ data, filename: article.original_filename });
     } catch (err) {
       // The miner is meant to turn every bad input into an error line; if it throws instead, the
       // same bytes would throw again, so retrying is pointless.
       log.error(`[mining] miner threw on article ${articleId}:`, err);
       await fail(articleId, "internal", `The miner stopped on this file (${(err as Error).message ?? "unknown error"}). The error was logged.`);
       return "failed";
+    } finally {
+      await releaseMiner(held);
     }
     const asError = ErrorLine.safeParse(result.line);
     if (asError.success) {
@@ -159,14 +195,23 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     return "done";
   }
 
-  const limit = RETRY.mining.retryLimit;
+  const limit = retry.retryLimit;
+  const JobData = z.object({ articleId: z.string().uuid() });
   async function handleOne(job: Job<MiningJobData>) {
-    const parsed = z.object({ articleId: z.string().uuid() }).safeParse(job.data);
+    const parsed = JobData.safeParse(job.data);
     if (!parsed.success) {
       log.error(`[mining] job ${job.id} has no valid articleId; dropped.`);
       return;
     }
     const { articleId } = parsed.data;
+    if (job.retryCount > 0) {
+      // Still `reading`/`mining` from the previous try: that try never came back (worker crashed,
+      // or its claim expired). Say so in the article's history before trying again.
+      const a = await db.selectFrom("articles").select("status").where("id", "=", articleId).executeTakeFirst();
+      if (a && (a.status === "reading" || a.status === "mining")) {
+        await recordEvent(db, articleId, "retry", `Try ${job.retryCount} of ${limit + 1} stopped without finishing (worker crashed or timed out); trying again.`);
+      }
+    }
     try {
       const r = await run(articleId);
       if (r === "missing") log.warn(`[mining] article ${articleId} no longer exists; job ${job.id} dropped.`);
@@ -188,7 +233,7 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
 
   return {
     name: MINING_QUEUE,
-    preset: RETRY.mining,
+    preset: retry,
     concurrency: Number(process.env.ECHOLINE_MINING_CONCURRENCY ?? 1),
     // pg-boss hands a batch; each article is its own unit, so one bad article never fails the others.
     handler: async (jobs) => {
@@ -214,10 +259,31 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
       }
       return out;
     },
+    handleStopped: async (jobs) => {
+      for (const job of jobs) {
+        const parsed = JobData.safeParse(job.data);
+        if (!parsed.success) {
+          log.error(`[mining] stopped job ${job.id} has no valid articleId; dropped.`);
+          continue;
+        }
+        const { articleId } = parsed.data;
+        // A re-mine sent since then owns the article now; its own outcome will be recorded.
+        const newer = (await deps.boss.findJobs<MiningJobData>(MINING_QUEUE, { key: articleId })).filter(
+          (j) => j.id !== job.sourceId && (j.state === "created" || j.state === "retry" || j.state === "active"),
+        );
+        if (newer.length) continue;
+        const tries = (job.sourceRetryCount ?? limit) + 1;
+        // Only an article still in progress: one the handler already failed (a retryable error on
+        // the last try lands here too) keeps the reason it was given.
+        const marked = await fail(articleId, "stopped", `Mining stopped ${tries} ${tries === 1 ? "time" : "times"} without finishing (worker crashed or timed out).`, ["queued", "reading", "mining"]);
+        if (marked) log.warn(`[mining] article ${articleId}: ${tries} tries stopped without finishing; marked failed.`);
+      }
+    },
     run: async (articleId) => run(articleId),
     close: async () => {
-      if (miner) await miner.miner.close();
+      const h = miner;
       miner = null;
+      if (h) await retire(h);
     },
   };
 }

@@ -1,4 +1,5 @@
 import type { ColumnType, Generated } from "kysely";
+import type { MetadataEntry } from "@/lib/metadata";
 
 type Timestamp = ColumnType<Date, Date | string, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
@@ -37,6 +38,9 @@ export interface UploadBatchTable {
   created_by: string | null;
   file_count: Generated<number>;
   created_at: Generated<Timestamp>;
+  /** The metadata file sent with the batch (migration 20261201T1842), and its parsed entries. */
+  metadata_filename: ColumnType<string | null, string | null | undefined, string | null>;
+  metadata_entries: ColumnType<MetadataEntry[], string | undefined, string>;
 }
 export interface ArticleTable {
   id: Generated<string>;

@@ -1,21 +1,18 @@
 /** Upload batches: the files a curator sent together, and the metadata file sent with them. */
-import { sql, type Transaction } from "kysely";
+import type { Transaction } from "kysely";
 import type { Database, DB } from "@/db";
 import { matchEntry, type MetadataEntry } from "@/lib/metadata";
 import type { IngestMetadata } from "./ingest";
 
 export async function createBatch(db: DB, input: { createdBy: string | null; metadataFilename?: string | null; entries?: MetadataEntry[] }): Promise<string> {
-  const row = await db.insertInto("upload_batches").values({ created_by: input.createdBy }).returning("id").executeTakeFirstOrThrow();
-  if (input.entries?.length) {
-    // The columns come from migration 20261201T1842 and are not in the shared table types.
-    await sql`update upload_batches set metadata_filename = ${input.metadataFilename ?? null}, metadata_entries = ${JSON.stringify(input.entries)}::jsonb where id = ${row.id}`.execute(db);
-  }
+  const withEntries = input.entries?.length ? { metadata_filename: input.metadataFilename ?? null, metadata_entries: JSON.stringify(input.entries) } : {};
+  const row = await db.insertInto("upload_batches").values({ created_by: input.createdBy, ...withEntries }).returning("id").executeTakeFirstOrThrow();
   return row.id;
 }
 
 async function entriesOf(db: DB | Transaction<Database>, batchId: string): Promise<MetadataEntry[]> {
-  const r = await sql<{ metadata_entries: MetadataEntry[] }>`select metadata_entries from upload_batches where id = ${batchId}`.execute(db);
-  return r.rows[0]?.metadata_entries ?? [];
+  const r = await db.selectFrom("upload_batches").select("metadata_entries").where("id", "=", batchId).executeTakeFirst();
+  return r?.metadata_entries ?? [];
 }
 
 export async function venueIdByName(db: DB | Transaction<Database>, name: string | null): Promise<string | undefined> {

@@ -3,11 +3,16 @@
  * option), so an article and its job are committed together or not at all.
  */
 import { CompiledQuery, type Kysely, type Transaction } from "kysely";
-import { PgBoss } from "pg-boss";
+import { PgBoss, type Queue } from "pg-boss";
 import type { Database, DB } from "@/db";
-import { RETRY } from "@/workers/job-types";
+import { miningPreset, type RetryPreset } from "@/workers/job-types";
 
 export const MINING_QUEUE = "mine-article";
+/**
+ * pg-boss moves a mining job here once its last try has failed without the handler settling the
+ * article itself: the worker died, or the claim expired. Its handler marks the article `failed`.
+ */
+export const MINING_STOPPED_QUEUE = "mine-article-stopped";
 export type MiningJobData = { articleId: string; reason?: "upload" | "remine" };
 
 type Executor = Kysely<Database> | Transaction<Database>;
@@ -22,12 +27,21 @@ export function bossDb(db: Executor) {
   };
 }
 
-export const miningQueueOptions = {
-  retryLimit: RETRY.mining.retryLimit,
-  retryDelay: RETRY.mining.retryDelay,
-  retryBackoff: RETRY.mining.retryBackoff,
-  expireInSeconds: RETRY.mining.expireInSeconds,
-};
+/** The mining queue's settings. Jobs are sent without options of their own, so they inherit these. */
+export function miningQueueOptions(preset: RetryPreset = miningPreset()) {
+  return {
+    retryLimit: preset.retryLimit,
+    retryDelay: preset.retryDelay,
+    retryBackoff: preset.retryBackoff,
+    expireInSeconds: preset.expireInSeconds,
+    // Absent, not undefined, when off: pg-boss rejects a heartbeatSeconds key whose value is undefined.
+    ...(preset.heartbeatSeconds ? { heartbeatSeconds: preset.heartbeatSeconds } : {}),
+    deadLetter: MINING_STOPPED_QUEUE,
+  };
+}
+
+// Marking an article failed is one short transaction; a few tries cover a database restart.
+const stoppedQueueOptions = { retryLimit: 5, retryDelay: 10, retryBackoff: true, expireInSeconds: 60 };
 
 // One sending instance per database handle. It supervises and polls nothing (worker processes do)
 // and leaves pg-boss's background index builds to the workers: those need multi-statement results,
@@ -47,6 +61,7 @@ export function senderFor(db: DB): Promise<PgBoss> {
       const boss = new PgBoss({ db: bossDb(db), ...quiet, migrate: false });
       boss.on("error", (err: Error) => console.error("[queue] pg-boss error:", err.message));
       await boss.start();
+      // Creates the queues when missing, but leaves the settings of existing ones to the workers.
       await ensureMiningQueue(boss);
       return boss;
     })();
@@ -56,21 +71,44 @@ export function senderFor(db: DB): Promise<PgBoss> {
   return p;
 }
 
-export async function ensureMiningQueue(boss: PgBoss): Promise<void> {
-  if (!(await boss.getQueue(MINING_QUEUE))) {
-    try {
-      await boss.createQueue(MINING_QUEUE, miningQueueOptions);
-    } catch (err) {
-      // Another process created it between our check and our create.
-      if (!(await boss.getQueue(MINING_QUEUE))) throw err;
-    }
+async function createIfMissing(boss: PgBoss, name: string, options: Parameters<PgBoss["createQueue"]>[1]): Promise<Queue | null> {
+  const existing = await boss.getQueue(name);
+  if (existing) return existing;
+  try {
+    await boss.createQueue(name, options);
+  } catch (err) {
+    // Another process created it between our check and our create.
+    if (!(await boss.getQueue(name))) throw err;
   }
+  return null;
+}
+
+/**
+ * Creates the mining queue and its dead-letter queue when missing. With `reconcile` (worker
+ * processes), an existing mining queue is brought to `preset`: queues created before the dead-letter
+ * queue and the heartbeat existed get them, and a changed preset takes effect.
+ */
+export async function ensureMiningQueue(boss: PgBoss, opts: { preset?: RetryPreset; reconcile?: boolean } = {}): Promise<void> {
+  const wanted = miningQueueOptions(opts.preset);
+  // The dead-letter queue first: a queue may only name one that exists.
+  await createIfMissing(boss, MINING_STOPPED_QUEUE, stoppedQueueOptions);
+  const existing = await createIfMissing(boss, MINING_QUEUE, wanted);
+  if (!existing || !opts.reconcile) return;
+  const differs =
+    existing.retryLimit !== wanted.retryLimit ||
+    existing.retryDelay !== wanted.retryDelay ||
+    existing.retryBackoff !== wanted.retryBackoff ||
+    existing.expireInSeconds !== wanted.expireInSeconds ||
+    (existing.heartbeatSeconds ?? null) !== (wanted.heartbeatSeconds ?? null) ||
+    existing.deadLetter !== wanted.deadLetter;
+  if (differs) await boss.updateQueue(MINING_QUEUE, { ...wanted, heartbeatSeconds: wanted.heartbeatSeconds ?? null });
 }
 
 /**
  * Enqueues mining of one article inside `trx`. The singleton key keeps one waiting job per article:
- * a second re-mine request while one waits returns null instead of queueing twice.
+ * a second re-mine request while one waits returns null instead of queueing twice. Retry, expiry,
+ * heartbeat and dead letter come from the queue (ensureMiningQueue).
  */
 export async function enqueueMining(boss: PgBoss, trx: Transaction<Database>, data: MiningJobData): Promise<string | null> {
-  return boss.send(MINING_QUEUE, data, { ...miningQueueOptions, singletonKey: data.articleId, db: bossDb(trx) });
+  return boss.send(MINING_QUEUE, data, { singletonKey: data.articleId, db: bossDb(trx) });
 }

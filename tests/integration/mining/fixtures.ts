@@ -42,6 +42,8 @@ function render(pages: string[][], options: PDFKit.PDFDocumentOptions = {}, draw
 }
 
 export const goodPdf = () => render(GOOD_PAGES);
+/** Any invented pages as a PDF (one string array per page). */
+export const pdfOf = (pages: string[][]) => render(pages);
 /** pdfkit's standard security handler (RC4/AES with a user password): readers must refuse it. */
 export const encryptedPdf = () => render(GOOD_PAGES, { userPassword: "invented-secret", ownerPassword: "owner", pdfVersion: "1.7" });
 /** Pages with drawings only, like a scan without OCR. */

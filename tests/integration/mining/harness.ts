@@ -7,12 +7,15 @@ import type { PgBoss } from "pg-boss";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { memoryStorage, type FileStorage } from "@/lib/storage";
 import { createMiner } from "@/lib/mining";
-import { ensureMiningQueue, MINING_QUEUE, senderFor } from "@/lib/corpus/queue";
+import { createIsolatedMiner, type IsolatedMinerOptions } from "@/lib/mining/isolated";
+import { ensureMiningQueue, MINING_QUEUE, MINING_STOPPED_QUEUE, senderFor, type MiningJobData } from "@/lib/corpus/queue";
 import { queueArticle, sha256Hex } from "@/lib/corpus/ingest";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { createWorkerBoss } from "@/workers/boss";
 import { buildJobs } from "@/workers/jobs";
 import type { MiningDeps, MiningJob } from "@/workers/mining-job";
+import type { RetryPreset } from "@/workers/job-types";
+import type { JobWithMetadata } from "pg-boss";
 import type { DB } from "@/db";
 import type { SourceKind } from "@/db/schema/corpus";
 
@@ -26,17 +29,44 @@ export type Harness = {
   stop(): Promise<void>;
 };
 
-export async function startHarness(opts: { beforeCommit?: MiningDeps["beforeCommit"]; concurrency?: number } = {}): Promise<Harness> {
+/**
+ * Retries without waiting, for suites that exercise them (production: RETRY.mining, 5 s growing).
+ * The heartbeat stays off: its floor of 10 s would dominate, and expiry covers these suites.
+ */
+export const FAST_RETRY: RetryPreset = { retryLimit: 3, retryDelay: 0, retryBackoff: false, expireInSeconds: 60 };
+
+export async function startHarness(
+  opts: {
+    beforeCommit?: MiningDeps["beforeCommit"];
+    concurrency?: number;
+    retry?: RetryPreset;
+    /** The worker's isolated miner (its thread) instead of the in-process one. */
+    isolated?: IsolatedMinerOptions;
+  } = {},
+): Promise<Harness> {
   const t = await createTestDatabase();
   await seedProcedures(t.db);
-  const storage = memoryStorage();
-  const boss = createWorkerBoss(t.url);
+  const mem = memoryStorage();
+  // The isolated miner takes the buffer it is given over; memoryStorage hands out its own copy, so
+  // give the worker a fresh one each time, as folderStorage does by reading the file.
+  const storage: FileStorage = { put: (sha, data) => mem.put(sha, data), get: async (key) => (await mem.get(key)).slice() };
+  const boss = createWorkerBoss(t.url, { superviseIntervalSeconds: 1 });
   await boss.start();
-  await ensureMiningQueue(boss);
+  await ensureMiningQueue(boss, { preset: opts.retry, reconcile: true });
   const errors: unknown[] = [];
   const quietLog = { info: () => {}, warn: () => {}, error: (...a: unknown[]) => errors.push(a) };
-  const { mining } = buildJobs({ db: t.db, storage, boss, createMiner: (o) => createMiner(o), log: quietLog, beforeCommit: opts.beforeCommit });
+  const isolated = opts.isolated;
+  const { mining } = buildJobs({
+    db: t.db,
+    storage,
+    boss,
+    retry: opts.retry,
+    createMiner: (o) => (isolated ? createIsolatedMiner({ ...isolated, ...o }) : createMiner(o)),
+    log: quietLog,
+    beforeCommit: opts.beforeCommit,
+  });
   await boss.work(MINING_QUEUE, { localConcurrency: opts.concurrency ?? 2, pollingIntervalSeconds: 0.5 }, mining.handler);
+  await boss.work(MINING_STOPPED_QUEUE, { includeMetadata: true, pollingIntervalSeconds: 0.5 }, (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs));
   return {
     db: t.db,
     url: t.url,

@@ -7,7 +7,7 @@ import { ingestFile } from "@/lib/corpus/ingest";
 import { senderFor } from "@/lib/corpus/queue";
 import { queueArticle } from "@/lib/corpus/ingest";
 import { sourcingOf, fingerprints } from "@/lib/corpus/store-mined";
-import { startHarness, waitForArticles, rowCounts, type Harness } from "./harness";
+import { startHarness, waitForArticles, rowCounts, FAST_RETRY, type Harness } from "./harness";
 import { goodPdf } from "./fixtures";
 
 let h: Harness;
@@ -15,6 +15,8 @@ let failNext = false;
 beforeAll(async () => {
   h = await startHarness({
     concurrency: 1,
+    // Production waits 5 s and more between tries; this suite only needs to see one happen.
+    retry: FAST_RETRY,
     beforeCommit: async () => {
       if (failNext) {
         failNext = false;
@@ -88,7 +90,7 @@ describe("mining pipeline", () => {
     // No statement was stored twice (the rolled-back try left no rows behind).
     const ordinals = await h.db.selectFrom("statements").select("ordinal").where("article_id", "=", articleId).execute();
     expect(new Set(ordinals.map((o) => o.ordinal)).size).toBe(ordinals.length);
-  }, 60_000);
+  });
 
   it("while the failing transaction is open, no partial rows are visible", async () => {
     let seenInside = -1;
