@@ -1,5 +1,5 @@
 /** Upload batches: the files a curator sent together, and the metadata file sent with them. */
-import type { Transaction } from "kysely";
+import type { Transaction, Updateable } from "kysely";
 import type { Database, DB } from "@/db";
 import { matchEntry, type MetadataEntry } from "@/lib/metadata";
 import type { IngestMetadata } from "./ingest";
@@ -49,7 +49,7 @@ export async function applyBatchMetadataByDoi(trx: Transaction<Database>, articl
   const e = matchEntry(await entriesOf(trx, a.upload_batch_id), { filename: "\u0000", doi });
   if (!e) return;
   const m = await toIngest(trx, e);
-  const set: Record<string, unknown> = {};
+  const set: Updateable<Database["articles"]> = {};
   if (!a.title && m.title) set.title = m.title;
   if (a.authors.length === 0 && m.authors) set.authors = JSON.stringify(m.authors);
   if (a.year == null && m.year) set.year = m.year;

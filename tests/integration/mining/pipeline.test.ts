@@ -151,3 +151,35 @@ describe("mining pipeline", () => {
     expect(linked.length).toBeGreaterThanOrEqual(3);
   });
 });
+
+describe("upload batches with a metadata file", () => {
+  it("stores the parsed entries in the batch's typed columns and matches them by file name and, after mining, by DOI", async () => {
+    const { parseMetadata } = await import("@/lib/metadata");
+    const { createBatch, metadataForFile, applyBatchMetadataByDoi } = await import("@/lib/corpus/batches");
+    const fs = await import("node:fs");
+    const path = await import("node:path");
+    // Invented BibTeX fixture; the expected values are read off the file by hand.
+    const bib = fs.readFileSync(path.join(import.meta.dirname, "../../fixtures/metadata/invented.bib"), "utf8");
+    const { entries } = await parseMetadata(bib);
+    const batchId = await createBatch(h.db, { createdBy: null, metadataFilename: "invented.bib", entries });
+    const stored = await h.db.selectFrom("upload_batches").select(["metadata_filename", "metadata_entries"]).where("id", "=", batchId).executeTakeFirstOrThrow();
+    expect(stored.metadata_filename).toBe("invented.bib");
+    expect(stored.metadata_entries.map((e) => e.title)).toEqual(["Shift Rhythms and Ward Climate", "Measuring Invented Constructs"]);
+    const byName = await metadataForFile(h.db, batchId, "okafor2019.pdf");
+    expect(byName).toMatchObject({ matched: true, metadata: { title: "Shift Rhythms and Ward Climate", year: 2019, licence: "CC BY 4.0" } });
+    expect((await metadataForFile(h.db, batchId, "unlisted.pdf")).matched).toBe(false);
+    // A batch without a metadata file keeps the column defaults (no file name, no entries).
+    const plain = await createBatch(h.db, { createdBy: null });
+    expect(await h.db.selectFrom("upload_batches").select(["metadata_filename", "metadata_entries"]).where("id", "=", plain).executeTakeFirstOrThrow()).toEqual({ metadata_filename: null, metadata_entries: [] });
+
+    // An article of the batch whose file name matched nothing: the DOI read from the document does.
+    const bytes = text("Methods\nAn invented sentence for the batch test.");
+    const sha = (await import("@/lib/corpus/ingest")).sha256Hex(bytes);
+    const key = await h.storage.put(sha, bytes);
+    await h.db.insertInto("stored_files").values({ sha256: sha, size_bytes: bytes.length, media_type: "text/plain", storage_key: key }).execute();
+    const art = await h.db.insertInto("articles").values({ file_sha256: sha, original_filename: "renamed.txt", source_kind: "text", upload_batch_id: batchId }).returning("id").executeTakeFirstOrThrow();
+    await h.db.transaction().execute((trx) => applyBatchMetadataByDoi(trx, art.id, "10.5555/jics.2019.014"));
+    const filled = await h.db.selectFrom("articles").select(["title", "authors", "year", "licence"]).where("id", "=", art.id).executeTakeFirstOrThrow();
+    expect(filled).toEqual({ title: "Shift Rhythms and Ward Climate", authors: ["Okafor, Tunde", "Lindqvist, Maren"], year: 2019, licence: "CC BY 4.0" });
+  });
+});
