@@ -89,6 +89,8 @@ const numberedRe = new RegExp(String.raw`\[(\d+(?:\s*[-–—,]\s*\d+)*)(?:\s*,\
 
 /** All in-text citations of one sentence, in order of appearance. */
 export function findCitations(sentence: string, numbered: Map<number, Reference>): FoundCitation[] {
+  // Every form below needs a bracket; most sentences have none, and the author patterns are costly.
+  if (!sentence.includes("(") && !sentence.includes("[")) return [];
   const found: { at: number; c: FoundCitation[] }[] = [];
   const consumed: [number, number][] = [];
   // Parenthetical groups (balanced one level deep).
@@ -143,6 +145,7 @@ export function findCitations(sentence: string, numbered: Map<number, Reference>
 
 /** The sentence with its citations taken out, so that years and page numbers are not read as values. */
 export function stripCitations(sentence: string): string {
+  if (!sentence.includes("(") && !sentence.includes("[")) return sentence.replace(/\s+/g, " ");
   let s = sentence.replace(/\(([^()]*(?:\([^()]*\)[^()]*)*)\)/g, (m, inner: string) =>
     parseParenthetical(inner).length ? " " : m,
   );

@@ -125,8 +125,9 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
       const cites = findCitations(sentence, numbered);
       for (const c of cites) citations.push({ ...c, page, sentence });
       const stripped = stripCitations(sentence);
-      const found = extractStatements(stripped, matchProcedure, { hasCitation: cites.length > 0, previousStatistic });
-      previousStatistic = lastStatistic(stripped) ?? previousStatistic;
+      let last: ReturnType<typeof lastStatistic> = null;
+      const found = extractStatements(stripped, matchProcedure, { hasCitation: cites.length > 0, previousStatistic, onLastStatistic: (k) => (last = k) });
+      previousStatistic = last ?? previousStatistic;
       for (const st of found) {
         statements.push({ page, section: block.section, sentence, ...st, citations: cites });
       }

@@ -10,13 +10,16 @@ const SECTION_WORDS: [Section, RegExp][] = [
 ];
 const REFERENCE_HEADING = new RegExp(String.raw`^\s*${NUM}(references|bibliography|works cited|literature cited|reference list)\s*$`, "i");
 
+// Built once: parseHeading runs on every line of every page.
+const HEADING_RE = new RegExp(String.raw`^(${NUM})(\p{Lu}[^.!?]*)$`, "u");
+
 export type Heading = { level: number; section: Section | null; text: string };
 
 /** A line is a heading when it is short, has no final full stop and starts with a capital or a number. */
 export function parseHeading(line: string): Heading | null {
   const t = line.trim();
   if (!t || t.length > 70 || /[.,;:]$/.test(t) && !/^\d+\.$/.test(t)) return null;
-  const m = new RegExp(String.raw`^(${NUM})(\p{Lu}[^.!?]*)$`, "u").exec(t);
+  const m = HEADING_RE.exec(t);
   if (!m) return null;
   const words = m[2].split(/\s+/);
   if (words.length > 8) return null;

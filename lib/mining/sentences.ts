@@ -1,10 +1,10 @@
 // Sentence segmentation for methods prose.
-// natural's SentenceTokenizer (deep import: the package root loads database clients and dotenv) does the
-// splitting at terminal punctuation and quotes. It does not serve on its own for scholarly text: it splits
+// Splitting follows natural's SentenceTokenizer (terminal punctuation and quotes; see tokenizeLikeNatural
+// for why its rule is applied here rather than the module called). It does not serve on its own for
+// scholarly text: it splits
 // ".85" (decimals without a leading zero, the APA style for statistics bounded by 1), "Fig. 2", "p. 12",
 // "et al." and initials, and its own abbreviation option matches substrings anywhere ("p." inside
 // "step."). So those dots are masked before it runs and restored after.
-import SentenceTokenizer from "natural/lib/natural/tokenizers/sentence_tokenizer.js";
 
 const DOT = "\u2024"; // ONE DOT LEADER: never present in extracted text, same length as "."
 
@@ -36,31 +36,49 @@ function mask(text: string): string {
   return t;
 }
 
-const tokenizer = new SentenceTokenizer([], true);
+// Where natural does not serve: its tokenize() is quadratic in its input. For every sentence it finds it
+// builds one RegExp per placeholder of the whole input (revertReplacements / revertDelimiters), so one
+// 300-page discussion section took minutes (measured: 9.0 s of mining for 74 pages, 34 s for 149), and
+// even fed short pieces its placeholder round trip was a third of the miner's time on the demo corpus.
+// What it decides, once the dots above are masked, is small: a sentence ends after each match of its
+// delimiter pattern, except inside what its URI pattern matches (its number placeholders protect only
+// "1.5"-like dots, which are masked already). That rule is applied here in one linear pass, with
+// natural's own two patterns (natural 8.1.1, lib/natural/tokenizers/sentence_tokenizer.js);
+// tests/unit/mining/sentences-scale.test.ts checks that the output equals natural's on whole texts.
+const NATURAL_URI = /(https?:\/\/\S+|www\.\S+|ftp:\/\/\S+|(mailto:)?[a-zA-Z0-9._%+-]+@[a-zA-Z0-9.-]+\.[a-zA-Z]{2,}|file:\/\/\S+)/gi;
+const NATURAL_DELIMITER = /([.?!… ]*)([.?!…])(["'”’)}\]]?)/g;
 
-// natural's tokenize() is quadratic in its input: for every sentence it finds it builds one RegExp per
-// placeholder of the whole input (revertReplacements / revertDelimiters), so a 300-page discussion
-// section took minutes (measured: 9 s for 74 pages, 34 s for 149). Here it does not serve as is, so it
-// only ever gets short pieces, cut where it would cut anyway: at a space that follows a sentence
-// delimiter (. ? ! …) and precedes a character that cannot continue a delimiter run. Its delimiter
-// pattern ([.?!… ]*)([.?!…])(["'”’)}\]]?) cannot match across such a space, and its URI and number
-// placeholders never contain a space, so the pieces' sentences are exactly those of the whole text
-// (tests/unit/mining/sentences-scale.test.ts checks this against natural on the whole text).
-const PIECE_CHARS = 600;
-const SAFE_CUT = /[.?!…] (?=[^.?!… ])/g;
+/** A character absent from the text, to stand for one URI while delimiters are found (natural uses "{{URI_n}}"). */
+function holeFor(text: string): string {
+  for (let c = 0xe000; c <= 0xf8ff; c++) {
+    const h = String.fromCharCode(c);
+    if (!text.includes(h)) return h;
+  }
+  throw new Error("Text uses every private-use character; it cannot be split into sentences.");
+}
 
-function tokenizeInPieces(masked: string): string[] {
-  if (masked.length <= PIECE_CHARS) return tokenizer.tokenize(masked);
+/** natural's SentenceTokenizer([], true).tokenize(text), without its quadratic placeholder round trip. */
+export function tokenizeLikeNatural(text: string): string[] {
+  const uris: string[] = [];
+  const hole = holeFor(text);
+  // Every form of NATURAL_URI needs one of these; skipping its pass saves a scan that tries each letter.
+  const holed = /@|:\/\/|www\./i.test(text) ? text.replace(NATURAL_URI, (m) => (uris.push(m), hole)) : text;
   const out: string[] = [];
   let from = 0;
-  SAFE_CUT.lastIndex = PIECE_CHARS;
-  for (let m = SAFE_CUT.exec(masked); m; m = SAFE_CUT.exec(masked)) {
-    const cut = m.index + 1;
-    for (const s of tokenizer.tokenize(masked.slice(from, cut))) out.push(s);
-    from = cut;
-    SAFE_CUT.lastIndex = cut + PIECE_CHARS;
+  let u = 0;
+  const take = (piece: string) => {
+    const restored = uris.length ? piece.replaceAll(hole, () => uris[u++]) : piece;
+    out.push(restored.trim());
+  };
+  for (const m of holed.matchAll(NATURAL_DELIMITER)) {
+    const end = m.index + m[0].length;
+    take(holed.slice(from, end));
+    from = end;
   }
-  for (const s of tokenizer.tokenize(masked.slice(from))) out.push(s);
+  take(holed.slice(from));
+  // natural drops empty sentences at both ends only; the caller skips the rest.
+  while (out.length && out[out.length - 1] === "") out.pop();
+  while (out.length && out[0] === "") out.shift();
   return out;
 }
 
@@ -68,7 +86,7 @@ export function splitSentences(text: string): string[] {
   const flat = text.replace(/\s+/g, " ").trim();
   if (!flat) return [];
   const masked = mask(flat);
-  const raw = tokenizeInPieces(masked);
+  const raw = tokenizeLikeNatural(masked);
   const out: string[] = [];
   for (const s of raw) {
     const restored = s.replaceAll(DOT, ".").trim();

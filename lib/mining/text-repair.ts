@@ -17,7 +17,9 @@ const KEEP_HYPHEN_PREFIX = /(?:^|[^\p{L}])(self|non|cross|item|well|quasi|semi|m
  * the hyphen stays, if it writes "comprises" elsewhere the parts are joined.
  */
 export function joinHyphenated(text: string, vocabulary: Set<string> = new Set()): string {
-  return text.replace(/([\p{L}]+)-[ \t]*\n[ \t]*([\p{L}\d]+)/gu, (m, a: string, b: string) => {
+  // The look-behind only starts matches at a word's first letter, where the leftmost match starts
+  // anyway; without it every letter of every word was tried as a start (quadratic in word length).
+  return text.replace(/(?<!\p{L})(\p{L}+)-[ \t]*\n[ \t]*([\p{L}\d]+)/gu, (m, a: string, b: string) => {
     const joined = `${a}${b}`.toLowerCase();
     const hyphened = `${a}-${b}`.toLowerCase();
     if (vocabulary.has(hyphened)) return `${a}-${b}`;
