@@ -119,6 +119,22 @@ describe("the worker process", () => {
     await kill(third);
   }, 120_000);
 
+  it("the heartbeat notices a killed worker long before its claim expires (the production mechanism)", async () => {
+    // One try, a claim that would last 5 min, and pg-boss's smallest heartbeat (10 s).
+    const env = { ECHOLINE_MINING_RETRY: JSON.stringify({ retryLimit: 0, retryDelay: 0, retryBackoff: false, expireInSeconds: 300, heartbeatSeconds: 10 }) };
+    const first = await startWorker({ ...env, ECHOLINE_TEST_WORKER_HANG_AFTER_READING: "1" });
+    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), { data: await pdfOf([["Heartbeat fixture, invented."]]), filename: "heartbeat.pdf", uploadedBy: null });
+    await until(async () => (await readingCount(t.db, articleId)) >= 1, 30_000, () => `never started:\n${first.output()}`);
+    const killedAt = Date.now();
+    await kill(first);
+    const second = await startWorker(env);
+    const [final] = [...(await waitForArticles(t.db, [articleId], 60_000)).values()];
+    expect(final).toMatchObject({ status: "failed", failure_code: "stopped", failure_message: "Mining stopped 1 time without finishing (worker crashed or timed out)." });
+    // Well inside the 300 s expiry: heartbeat 10 s + supervise 1 s + worker start-up and polling.
+    expect(Date.now() - killedAt).toBeLessThan(60_000);
+    await kill(second);
+  }, 120_000);
+
   it("a document that never finishes ends failed (timeout) and the worker goes on to the next; SIGTERM waits for the document in progress", async () => {
     const w = await startWorker({ ECHOLINE_MINER_HARD_TIMEOUT_SECONDS: "4" });
     const storage = folderStorage(filesDir);
