@@ -1,5 +1,5 @@
 // Public API of the miner, shared by the CLI (lib/mining/cli.ts) and the background worker.
-import { PDFParse } from "pdf-parse";
+import type { PDFParse } from "pdf-parse";
 import { findCitations, stripCitations } from "./citations";
 import {
   ContractLine, type DocumentCitation, type ErrorCode, type ErrorLine, type Reference, type Section, type Statement,
@@ -12,6 +12,7 @@ import { isReferenceHeading, parseHeading } from "./sections";
 import { splitSentences } from "./sentences";
 import { extractStatements, lastStatistic } from "./statements";
 import { type PositionedItem, pageTextInReadingOrder } from "./layout";
+import { loadPdfParse } from "./pdfjs";
 import { repairPages } from "./text-repair";
 
 export type { ProcedurePattern } from "./procedures";
@@ -236,27 +237,32 @@ export async function extractPdfPages(data: Uint8Array, opts: { maxPages?: numbe
 }
 
 async function readPdf(data: Uint8Array, maxPages: number, timeoutMs: number): Promise<{ pages: string[]; info: Record<string, unknown>; layoutMs: number }> {
+  // Loading pdf.js (first document only) is not the document's time.
+  const { PDFParse } = await loadPdfParse();
   // pdf.js takes ownership of (and may detach) the buffer it is given, so it gets a copy.
   // One parser per document: PDFParse binds its data at construction (see "Keeping a parser warm" above).
   const parser = new PDFParse({ data: new Uint8Array(data), verbosity: 0, stopAtErrors: false });
+  let destroyed: Promise<void> | null = null;
+  // Once, with its own handler: called on timeout and again when the document is done.
+  const destroy = () => (destroyed ??= parser.destroy().catch(() => undefined));
+  const work = (async () => {
+    const info = await parser.getInfo();
+    if (info.total === 0) throw new MineError("zero_pages", "The PDF has no pages.");
+    if (info.total > maxPages) throw new MineError("too_many_pages", `The PDF has ${info.total} pages; the limit is ${maxPages}.`);
+    const { pages, layoutMs } = await pageTexts(parser, info.total);
+    const raw: unknown = info.info;
+    const infoDict = raw && typeof raw === "object" ? (raw as Record<string, unknown>) : {};
+    return { pages, info: infoDict, layoutMs };
+  })();
+  // After a timeout the work is abandoned and the destroyed document makes it reject; that rejection
+  // has nobody left to report to, so it is dropped here explicitly.
+  work.catch(() => undefined);
   try {
-    return await withTimeout(
-      (async () => {
-        const info = await parser.getInfo();
-        if (info.total === 0) throw new MineError("zero_pages", "The PDF has no pages.");
-        if (info.total > maxPages) throw new MineError("too_many_pages", `The PDF has ${info.total} pages; the limit is ${maxPages}.`);
-        const { pages, layoutMs } = await pageTexts(parser, info.total);
-        const raw: unknown = info.info;
-        const infoDict = raw && typeof raw === "object" ? (raw as Record<string, unknown>) : {};
-        return { pages, info: infoDict, layoutMs };
-      })(),
-      timeoutMs,
-      () => void parser.destroy().catch(() => undefined),
-    );
+    return await withTimeout(work, timeoutMs, () => void destroy());
   } catch (err) {
     throw classifyPdfError(err);
   } finally {
-    await parser.destroy().catch(() => undefined);
+    await destroy();
   }
 }
 

@@ -1,0 +1,45 @@
+// Loads pdf-parse (and with it pdf.js) once, on first use, without Node's source-map support.
+//
+// Why (measured with process.memoryUsage() under `node --import tsx`, which turns source maps on):
+// pdf.js's legacy build carries core-js, which reads `new Error().stack` while its modules are
+// evaluated. With source maps on, formatting that stack makes Node decode the map of every frame's
+// file and keep it: pdf.mjs.map (2.3 MB) on import, pdf.worker.mjs.map (5.3 MB) when the first
+// document starts pdf.js's in-thread worker. Importing the miner cost +157 MB RSS / +62 MB heap and
+// the first PDF another ~290 MB RSS / ~150 MB heap; with the maps left out, +131 MB / +16 MB and
+// ~180 MB / ~30 MB. So source maps are switched off only while these modules load (their stack traces
+// then show the built files' own lines; every other module keeps its maps), and pdf.js gets its
+// minified worker, which ships without a map, instead of looking up ./pdf.worker.mjs.
+// A module that happens to load in the same few hundred milliseconds also loads without a map; that
+// only changes how its stack traces read.
+import { createRequire } from "node:module";
+import { pathToFileURL } from "node:url";
+
+type PdfParseModule = typeof import("pdf-parse");
+
+let loading: Promise<PdfParseModule> | null = null;
+
+async function load(): Promise<PdfParseModule> {
+  const mapsWereOn = process.sourceMapsEnabled;
+  if (mapsWereOn) process.setSourceMapsEnabled(false);
+  try {
+    const mod = await import("pdf-parse");
+    // The pdf.js that pdf-parse itself depends on, so that worker and API versions match.
+    const fromPdfParse = createRequire(createRequire(import.meta.url).resolve("pdf-parse"));
+    const workerFile = fromPdfParse.resolve("pdfjs-dist/legacy/build/pdf.worker.min.mjs");
+    // Sets globalThis.pdfjsWorker, which pdf.js uses in place of importing its default worker file.
+    await import(pathToFileURL(workerFile).href);
+    return mod;
+  } finally {
+    if (mapsWereOn) process.setSourceMapsEnabled(true);
+  }
+}
+
+/** pdf-parse, loaded once per process (or thread). */
+export function loadPdfParse(): Promise<PdfParseModule> {
+  loading ??= load().catch((err: unknown) => {
+    // A failed load is retried by the next document rather than remembered.
+    loading = null;
+    throw err;
+  });
+  return loading;
+}
