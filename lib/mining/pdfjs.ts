@@ -11,10 +11,31 @@
 // minified worker, which ships without a map, instead of looking up ./pdf.worker.mjs.
 // A module that happens to load in the same few hundred milliseconds also loads without a map; that
 // only changes how its stack traces read.
+import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { pathToFileURL } from "node:url";
 
 type PdfParseModule = typeof import("pdf-parse");
+
+// A pdf.js bug (5.4.296, Catalog.getPageDict): while walking the page tree it prefetches the top-level
+// kids into pageDictCache with xref.fetchAsync(ref) and does not wait for them. When one of those
+// objects is damaged and the walk never comes back to it (a flipped byte in a kid's xref entry, or the
+// cache being cleared by recovery), that promise rejects with nobody listening: Node reports an
+// unhandled rejection (XRefEntryException, FormatError) though every promise the miner starts has a
+// handler (reproduced with pdf.js alone, no pdf-parse, on flipped-byte copies of the gold PDFs). The
+// miner cannot reach that promise, so the worker is loaded with one change: the prefetched promise
+// gets a no-op handler as well; whoever awaits it later still sees the rejection. The text matched is
+// the minified statement of this exact build; if it is not found once (another pdf.js version), the
+// file is loaded unchanged and tests/unit/mining/unhandled.test.ts says so.
+const UNWATCHED_PREFETCH = "o.put(r,n.fetchAsync(r))";
+const WATCHED_PREFETCH = "o.put(r,(p=>(p.catch(()=>{}),p))(n.fetchAsync(r)))";
+
+function workerModuleUrl(file: string): string {
+  const source = readFileSync(file, "utf8");
+  if (source.split(UNWATCHED_PREFETCH).length !== 2) return pathToFileURL(file).href;
+  const patched = source.replace(UNWATCHED_PREFETCH, WATCHED_PREFETCH);
+  return `data:text/javascript;base64,${Buffer.from(patched).toString("base64")}`;
+}
 
 let loading: Promise<PdfParseModule> | null = null;
 
@@ -27,7 +48,7 @@ async function load(): Promise<PdfParseModule> {
     const fromPdfParse = createRequire(createRequire(import.meta.url).resolve("pdf-parse"));
     const workerFile = fromPdfParse.resolve("pdfjs-dist/legacy/build/pdf.worker.min.mjs");
     // Sets globalThis.pdfjsWorker, which pdf.js uses in place of importing its default worker file.
-    await import(pathToFileURL(workerFile).href);
+    await import(workerModuleUrl(workerFile));
     return mod;
   } finally {
     if (mapsWereOn) process.setSourceMapsEnabled(true);

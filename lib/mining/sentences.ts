@@ -23,7 +23,8 @@ const abbrevRe = new RegExp(
   "gu",
 );
 
-function mask(text: string): string {
+/** The text with every dot that does not end a sentence replaced by DOT (exported for tests). */
+export function mask(text: string): string {
   let t = text.replace(abbrevRe, (m) => m.replaceAll(".", DOT));
   // decimals: .85, 0.85, 4.2.1, "α = .05"
   t = t.replace(/(^|[\s(=<>≥≤~±\[,;:–—-])\.(\d)/g, (_m, a: string, d: string) => `${a}${DOT}${d}`);
