@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { fetchJson, ApiError } from "@/lib/http/fetch-json";
+import { fetchJson, formErrorsOf } from "@/lib/http/fetch-json";
 import { inviteSchema, fieldErrors } from "@/lib/forms/accounts";
 import { ROLES } from "@/db/schema/accounts";
 import { Field, FormError } from "@/components/ui/field";
@@ -24,7 +24,7 @@ export function PeopleManager({ selfId }: { selfId: string }) {
       setSent((body as { email: string }).email);
       qc.invalidateQueries({ queryKey: ["admin", "users"] });
     },
-    onError: (e) => setErrors(e instanceof ApiError && e.field ? { [e.field]: e.message } : { form: e.message }),
+    onError: (e) => setErrors(formErrorsOf(e)),
   });
   const patch = useMutation({
     mutationFn: ({ id, body }: { id: string; body: unknown }) => fetchJson(`/api/admin/users/${id}`, { method: "PATCH", json: body }),

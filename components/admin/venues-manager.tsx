@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { fetchJson, ApiError } from "@/lib/http/fetch-json";
+import { fetchJson, formErrorsOf } from "@/lib/http/fetch-json";
 import { venueSchema, fieldErrors } from "@/lib/forms/accounts";
 import { Field, FormError } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
@@ -16,7 +16,7 @@ export function VenuesManager() {
   const create = useMutation({
     mutationFn: (body: unknown) => fetchJson("/api/admin/venues", { method: "POST", json: body }),
     onSuccess: () => qc.invalidateQueries({ queryKey: ["venues"] }),
-    onError: (e) => setErrors(e instanceof ApiError && e.field ? { [e.field]: e.message } : { form: e.message }),
+    onError: (e) => setErrors(formErrorsOf(e)),
   });
   const toggle = useMutation({
     mutationFn: (v: Venue) => fetchJson(`/api/admin/venues/${v.id}`, { method: "PATCH", json: { isMethodsVenue: !v.is_methods_venue } }),

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useMutation } from "@tanstack/react-query";
 import { acceptInvitationSchema, fieldErrors } from "@/lib/forms/accounts";
-import { fetchJson, ApiError } from "@/lib/http/fetch-json";
+import { fetchJson, formErrorsOf } from "@/lib/http/fetch-json";
 import { Field, FormError } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 
@@ -13,7 +13,7 @@ export function AcceptInvitationForm({ token }: { token: string }) {
   const accept = useMutation({
     mutationFn: (body: unknown) => fetchJson("/api/invitations/accept", { method: "POST", json: body }),
     onSuccess: () => router.push("/sign-in?welcome=1"),
-    onError: (e) => setErrors(e instanceof ApiError && e.field ? { [e.field]: e.message } : { form: e.message }),
+    onError: (e) => setErrors(formErrorsOf(e)),
   });
   return (
     <form

@@ -25,3 +25,8 @@ export async function fetchJson<T>(input: string, init?: RequestInit & { json?: 
   }
   return data as T;
 }
+
+/** A failed request as form errors: on the field the server named, else on the whole form. */
+export function formErrorsOf(e: Error): Record<string, string> {
+  return e instanceof ApiError && e.field ? { [e.field]: e.message } : { form: e.message };
+}

@@ -16,6 +16,7 @@
  * (it may rebuild .next and serves from it). BENCH_SCALE=0.1 makes a tenth-size run for a quick check.
  */
 import http from "node:http";
+import { signInOverHttp } from "../helpers/http";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -215,26 +216,13 @@ function stopNext(child: ChildProcess): Promise<void> {
   });
 }
 
-const cookiesOf = (res: Response) => res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
-
 /** A reader account in the bench database, signed in through next-auth's credentials callback. */
 async function readerCookie(db: DB): Promise<string> {
   const hash = await hashPassword(READER.password);
   // E-mails are unique case-insensitively (an expression index), so replace rather than upsert.
   await db.deleteFrom("User").where(sql`lower(email)`, "=", READER.email).execute();
   await db.insertInto("User").values({ email: READER.email, name: "Bench reader", role: "reader", password_hash: hash, emailVerified: null, image: null, deactivated_at: null }).execute();
-  const csrf = await fetch(`${APP}/api/auth/csrf`);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const jar = cookiesOf(csrf);
-  const res = await fetch(`${APP}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: jar },
-    body: new URLSearchParams({ email: READER.email, password: READER.password, csrfToken, callbackUrl: `${APP}/home` }),
-  });
-  const all = [jar, cookiesOf(res)].filter(Boolean).join("; ");
-  if (!/authjs\.session-token=/.test(all)) throw new Error(`sign-in as the bench reader gave no session cookie (status ${res.status})`);
-  return all;
+  return signInOverHttp(APP, READER.email, READER.password);
 }
 
 /** The chart's own statement, exactly as lib/dashboards sends it (one statement per chart). */
