@@ -1,10 +1,9 @@
 // Sentence segmentation for methods prose.
 // Splitting follows natural's SentenceTokenizer (terminal punctuation and quotes; see tokenizeLikeNatural
-// for why its rule is applied here rather than the module called). It does not serve on its own for
-// scholarly text: it splits
-// ".85" (decimals without a leading zero, the APA style for statistics bounded by 1), "Fig. 2", "p. 12",
-// "et al." and initials, and its own abbreviation option matches substrings anywhere ("p." inside
-// "step."). So those dots are masked before it runs and restored after.
+// for why its rule is applied here rather than its module called). It does not serve on its own for
+// scholarly text: it splits ".85" (decimals without a leading zero, the APA style for statistics bounded
+// by 1), "Fig. 2", "p. 12", "et al." and initials, and its own abbreviation option matches substrings
+// anywhere ("p." inside "step."). So those dots are masked before the split and restored after.
 
 const DOT = "\u2024"; // ONE DOT LEADER: never present in extracted text, same length as "."
 
