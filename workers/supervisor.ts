@@ -10,6 +10,7 @@ import { migrateToLatest } from "@/db/migrate";
 import { seedAll } from "@/db/seed";
 import { startStack, runBuild, stackEnv, type Stack } from "./stack";
 import { loadDemoCorpus } from "@/lib/demo/load";
+import { senderFor } from "@/lib/corpus/queue";
 
 const t0 = Date.now();
 const cfg = {
@@ -51,7 +52,11 @@ try {
     loadDemoCorpus(demoDb, { cacheDir: path.join(DATA_DIR, "demo"), log: (s) => console.log(`[demo] ${s}`) })
       .then((r) => console.log(`[demo] invented demo corpus: ${r.created} new articles queued for mining, ${r.skipped} already loaded`))
       .catch((err) => console.error("[demo] could not load the demo corpus:", err instanceof Error ? err.message : err))
-      .finally(() => void demoDb.destroy());
+      // The loader's job sender polls through this handle: stop it before closing the pool.
+      .finally(async () => {
+        await (await senderFor(demoDb).catch(() => null))?.stop({ graceful: false, close: false }).catch(() => {});
+        await demoDb.destroy();
+      });
   }
 } catch (err) {
   console.error("[echoline] could not start:", err instanceof Error ? err.message : err);
