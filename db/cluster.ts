@@ -90,11 +90,19 @@ export function up(name: ClusterName): void {
   const log = path.join(DATA_DIR, `pg-${name}.log`);
   if (!fs.existsSync(log)) fs.writeFileSync(log, "");
   ownToPostgres(log);
-  runPg(path.join(bin, "pg_ctl"), [
+  const started = runPg(path.join(bin, "pg_ctl"), [
     "-D", dir, "-l", log, "-w", "-t", "60",
     "-o", `-c listen_addresses=127.0.0.1 -p ${port} -k ${socketDir} -c max_connections=200 -c shared_buffers=256MB -c fsync=${name === "test" ? "off" : "on"}`,
     "start",
-  ]);
+  ], { allowFail: true });
+  if (started.status !== 0) {
+    // Say why (the server's own log), e.g. the port is taken by another checkout's cluster.
+    const tail = fs.readFileSync(log, "utf8").trim().split("\n").slice(-4).join("\n");
+    const hint = /Address already in use/.test(tail)
+      ? `\nPort ${port} is taken, probably by another checkout's ${name} cluster: stop it there (npm run db:down${name === "test" ? " -- --test" : ""}) or set ${name === "test" ? "ECHOLINE_TEST_PG_PORT" : "ECHOLINE_PG_PORT"}.`
+      : "";
+    throw new Error(`PostgreSQL (${name}) did not start:\n${tail}${hint}`);
+  }
   console.log(`[db] ${name} cluster running on 127.0.0.1:${port}`);
 }
 
