@@ -54,19 +54,24 @@ export async function enabledProcedures(db: DB): Promise<ProcedurePattern[]> {
 
 export { ProcedureInput } from "./schemas";
 
+/** The stored columns of a procedure as the form gives it (lists kept as JSON). */
+function procedureRow(input: ProcedureInput, by: string) {
+  return {
+    key: input.key,
+    label: input.label,
+    description: input.description,
+    all_of: JSON.stringify(input.allOf),
+    any_of: JSON.stringify(input.anyOf),
+    none_of: JSON.stringify(input.noneOf),
+    enabled: input.enabled,
+    updated_by: by,
+  };
+}
+
 export async function createProcedure(db: DB, input: ProcedureInput, by: string): Promise<string> {
   const row = await db
     .insertInto("procedure_patterns")
-    .values({
-      key: input.key,
-      label: input.label,
-      description: input.description,
-      all_of: JSON.stringify(input.allOf),
-      any_of: JSON.stringify(input.anyOf),
-      none_of: JSON.stringify(input.noneOf),
-      enabled: input.enabled,
-      updated_by: by,
-    })
+    .values(procedureRow(input, by))
     .returning("id")
     .executeTakeFirstOrThrow();
   return row.id;
@@ -75,17 +80,7 @@ export async function createProcedure(db: DB, input: ProcedureInput, by: string)
 export async function updateProcedure(db: DB, id: string, input: ProcedureInput, by: string): Promise<boolean> {
   const r = await db
     .updateTable("procedure_patterns")
-    .set({
-      key: input.key,
-      label: input.label,
-      description: input.description,
-      all_of: JSON.stringify(input.allOf),
-      any_of: JSON.stringify(input.anyOf),
-      none_of: JSON.stringify(input.noneOf),
-      enabled: input.enabled,
-      updated_by: by,
-      updated_at: sql`now()`,
-    })
+    .set({ ...procedureRow(input, by), updated_at: sql`now()` })
     .where("id", "=", id)
     .executeTakeFirst();
   return Number(r.numUpdatedRows) > 0;

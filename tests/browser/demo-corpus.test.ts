@@ -3,7 +3,7 @@
  * mined by the running worker, resolved and traced by the graph jobs), not by inserting rows.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, signInAs, APP_URL, E2E_DATABASE_URL } from "../helpers/browser";
+import { launchBrowser, signInAs, followTrailToSentence, APP_URL, E2E_DATABASE_URL } from "../helpers/browser";
 import { sessionCookie } from "../helpers/http";
 import { createDb, type DB } from "@/db";
 import { loadDemoCorpus } from "@/lib/demo/load";
@@ -83,22 +83,7 @@ describe("a reader on the demo corpus", () => {
   });
 
   it("goes from a chart to a trail, down to the sentence in its article, and back", async () => {
-    await b.page.goto(`${APP_URL}/dashboards/trail-ends?practice=${alpha}`);
-    await b.page.getByRole("button", { name: "Open the trail graph" }).click();
-    await b.page.waitForURL(/\/trails\?/);
-    const trailLink = b.page.getByRole("link", { name: "its trail" }).first();
-    await trailLink.waitFor();
-    await trailLink.click();
-    await b.page.waitForURL(/\/trails\/[0-9a-f-]{36}/);
-    const sentence = b.page.getByRole("list", { name: "Trail steps" }).locator('a[href^="/articles/"]').first();
-    await sentence.waitFor();
-    const href = (await sentence.getAttribute("href")) ?? "";
-    await sentence.click();
-    await b.page.waitForURL(/\/articles\/[0-9a-f-]{36}/);
-    const anchor = href.split("#")[1];
-    await b.page.locator(`[id="${anchor}"]`).waitFor();
-    await expect(b.page.locator(`[id="${anchor}"]`).textContent()).resolves.toMatch(/\d/);
-    await b.page.goBack();
-    await b.page.waitForURL(/\/trails\/[0-9a-f-]{36}/);
+    const sentence = await followTrailToSentence(b.page, `${APP_URL}/dashboards/trail-ends?practice=${alpha}`);
+    expect(sentence).toMatch(/\d/);
   });
 });

@@ -57,3 +57,29 @@ export async function waitForMail(to: string, after: number, timeoutMs = 20_000)
   }
   throw new Error(`no mail for ${to} within ${timeoutMs} ms`);
 }
+
+/**
+ * The reader's path from a dashboard: open the practice's trail graph, one statement's trail, then
+ * the sentence in its article (which must carry the statement's anchor), and back.
+ */
+export async function followTrailToSentence(page: Page, dashboardUrl: string): Promise<string> {
+  await page.goto(dashboardUrl);
+  await page.getByRole("button", { name: "Open the trail graph" }).click();
+  await page.waitForURL(/\/trails\?/);
+  const trailLink = page.getByRole("link", { name: "its trail" }).first();
+  await trailLink.waitFor();
+  await trailLink.click();
+  await page.waitForURL(/\/trails\/[0-9a-f-]{36}/);
+  const sentence = page.getByRole("list", { name: "Trail steps" }).locator('a[href^="/articles/"]').first();
+  await sentence.waitFor();
+  const href = (await sentence.getAttribute("href")) ?? "";
+  if (!/^\/articles\/[0-9a-f-]{36}#statement-[0-9a-f-]{36}$/.test(href)) throw new Error(`unexpected sentence link ${href}`);
+  await sentence.click();
+  await page.waitForURL(/\/articles\/[0-9a-f-]{36}/);
+  const anchor = page.locator(`[id="${href.split("#")[1]}"]`);
+  await anchor.waitFor();
+  const text = (await anchor.textContent()) ?? "";
+  await page.goBack();
+  await page.waitForURL(/\/trails\/[0-9a-f-]{36}/);
+  return text;
+}
