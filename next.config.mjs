@@ -4,8 +4,6 @@ const nextConfig = {
   serverExternalPackages: ["pdf-parse", "pg", "pg-boss", "natural", "pdfkit", "nodemailer", "bcryptjs"],
   poweredByHeader: false,
   experimental: {
-    // Uploads go through route handlers, which read the body themselves and enforce their own limit.
-    serverActions: { bodySizeLimit: "1mb" },
     // forbidden() gives a real 403 page for a signed-in person without the permission.
     authInterrupts: true,
   },
