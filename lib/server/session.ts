@@ -1,6 +1,7 @@
 import { cache } from "react";
 import { redirect, forbidden as nextForbidden } from "next/navigation";
-import { auth } from "./auth";
+import { headers } from "next/headers";
+import { sessionUserId } from "./session-token";
 import { sql } from "kysely";
 import { getDb } from "@/db";
 import { can, type Actor, type Permission } from "@/lib/auth/permissions";
@@ -10,8 +11,8 @@ import { can, type Actor, type Permission } from "@/lib/auth/permissions";
  * Cached per request so a page and its components share one lookup.
  */
 export const getActor = cache(async (): Promise<Actor | null> => {
-  const session = await auth();
-  const id = session?.user?.id;
+  const h = await headers();
+  const id = await sessionUserId(h.get("cookie"), h.get("x-forwarded-proto"));
   if (!id) return null;
   // One round trip: the person and their venues together (this runs on every request).
   const user = await getDb()
