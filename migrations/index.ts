@@ -7,6 +7,7 @@ import * as dashboardSummaries from "./20261201T1834_dashboard_summaries";
 import * as uploadBatchMetadata from "./20261201T1842_upload_batch_metadata";
 import * as dashboardRollups from "./20261201T1901_dashboard_rollups";
 import * as dashboardFactCover from "./20261201T1906_dashboard_fact_cover";
+import * as inVenueNotLater from "./20261201T2042_in_venue_precedent_not_later";
 
 // Listed explicitly (no glob): the order here is the order they run. Append, never edit.
 export const migrations: Record<string, Migration> = {
@@ -18,4 +19,5 @@ export const migrations: Record<string, Migration> = {
   "20261201T1842_upload_batch_metadata": uploadBatchMetadata,
   "20261201T1901_dashboard_rollups": dashboardRollups,
   "20261201T1906_dashboard_fact_cover": dashboardFactCover,
+  "20261201T2042_in_venue_precedent_not_later": inVenueNotLater,
 };

@@ -87,6 +87,7 @@ export function DashboardView({ name }: { name: DashboardKind }) {
       {name === "venues" && (
         <section aria-labelledby="c4">
           <h3 id="c4" className="font-medium">Venue rates and in-venue precedent (95% Wilson intervals in the table)</h3>
+          <p className="text-sm text-ink-2">In-venue precedent: the share of a venue's citations for this practice that go to its own earlier articles (same venue, not published in a later year).</p>
           <SimpleBarChart rows={d.tables.venues.rows} keys={["rate", "in_venue_share"]} indexBy="venue" percent />
           <DataTable id="table-venues" table={d.tables.venues} csvHref={csv("venues")} />
         </section>

@@ -153,8 +153,8 @@ export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
 
 /**
  * Dashboard 4. Each venue's share of articles asserting the practice, and its in-venue precedent:
- * the share of its citations for the practice that go to articles of the same venue. Each venue is
- * compared with the rest of the corpus (the other venues pooled) by Newcombe's hybrid interval.
+ * the share of its citations for the practice that go to its own earlier articles (same venue, not published
+ * in a later year). Each venue is compared with the rest of the corpus (the other venues pooled) by Newcombe's hybrid interval.
  */
 type VenueCounts = { venue_id: string; venue: string; is_methods_venue: boolean; articles: number; asserting: number; citations: number; in_venue: number };
 

@@ -184,6 +184,26 @@ describe("dashboards read the roll-ups and still equal a hand count under every 
   });
 });
 
+describe("in-venue precedent counts only the venue's own earlier articles", () => {
+  it("a same-venue citation to an article published in a later year is not precedent", async () => {
+    // A2 (applied, 2019) cites A1 (applied, 2018): precedent. Dated 2020 instead, A1 is later than
+    // A2, so the same citation stays a citation of the venue but no longer counts as precedent.
+    const venueRow = async () => {
+      const d = await dashboardData(db, "venues", { practice: alpha });
+      return d.tables.venues.rows.find((r) => r.venue_id === ids.venues.applied);
+    };
+    await db.updateTable("articles").set({ year: 2020 }).where("id", "=", ids.articles.A1).execute();
+    try {
+      await refreshSummaries(db);
+      expect(await venueRow()).toMatchObject({ citations: 2, in_venue: 0 });
+    } finally {
+      await db.updateTable("articles").set({ year: 2018 }).where("id", "=", ids.articles.A1).execute();
+      await refreshSummaries(db);
+    }
+    expect(await venueRow()).toMatchObject({ citations: 2, in_venue: 1 });
+  });
+});
+
 describe("curator merge and split", () => {
   it("merging moves references and the graph follows; splitting undoes it", async () => {
     const a = await db.insertInto("works").values({ doi: null, title: "Invented duplicate", normalised_title: null, first_author: "x", year: "2001", article_id: null, merged_into: null }).returning("id").executeTakeFirstOrThrow();
