@@ -94,6 +94,8 @@ export interface ReferenceTable {
   doi: string | null;
   kind: Generated<ReferenceKind>;
   work_id: string | null;
+  /** "curator" when a merge or split put the reference on its work; re-resolution leaves those alone. */
+  work_set_by: Generated<"resolver" | "curator">;
 }
 export interface CitationTable {
   id: Generated<string>;

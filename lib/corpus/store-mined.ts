@@ -56,7 +56,18 @@ export async function replaceMinedRows(trx: Transaction<Database>, articleId: st
   // statement_citations go with their statements (on delete cascade).
   await trx.deleteFrom("statements").where("article_id", "=", articleId).execute();
   await trx.deleteFrom("citations").where("article_id", "=", articleId).execute();
+  // A curator's placement of a reference on a work (merge or split) outlives re-mining: it is put
+  // back on the new reference with the same text.
+  const placed = await trx
+    .selectFrom("references as r")
+    .innerJoin("works as w", "w.id", "r.work_id")
+    .select(["r.raw", "r.work_id"])
+    .where("r.article_id", "=", articleId)
+    .where("r.work_set_by", "=", "curator")
+    .where("w.merged_into", "is", null)
+    .execute();
   await trx.deleteFrom("references").where("article_id", "=", articleId).execute();
+  const placedBy = new Map(placed.map((p) => [p.raw, p.work_id!]));
 
   const refIds: string[] = [];
   if (line.references.length) {
@@ -73,6 +84,7 @@ export async function replaceMinedRows(trx: Transaction<Database>, articleId: st
           container: r.container,
           doi: r.doi,
           kind: r.kind,
+          ...(placedBy.has(r.raw) ? { work_id: placedBy.get(r.raw)!, work_set_by: "curator" as const } : {}),
         })),
       )
       .returning(["id", "ordinal"])

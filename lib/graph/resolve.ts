@@ -72,8 +72,8 @@ export async function ensureArticleWork(db: DB, articleId: string): Promise<{ wo
  * Resolves an article's references to works: a DOI match first, else title + first author + year
  * scored by lib/resolve with its measured threshold. A reference with no match makes a new work, so
  * later references to the same book land on it. References already resolved to one of our articles
- * are left alone; those resolved to an outside work are re-scored, so they move to a corpus article
- * that arrived since.
+ * are left alone, and so are those a curator placed by a merge or split; those resolved to an outside
+ * work are re-scored, so they move to a corpus article that arrived since.
  */
 export async function resolveArticleReferences(db: DB, articleId: string): Promise<{ resolved: number; created: number }> {
   const refs = await db
@@ -81,6 +81,7 @@ export async function resolveArticleReferences(db: DB, articleId: string): Promi
     .leftJoin("works as w", "w.id", "r.work_id")
     .select(["r.id", "r.raw", "r.authors", "r.year", "r.title", "r.doi", "r.container", "r.kind", "r.work_id", "w.article_id as work_article"])
     .where("r.article_id", "=", articleId)
+    .where("r.work_set_by", "<>", "curator")
     .orderBy("r.ordinal")
     .execute();
   let resolved = 0;

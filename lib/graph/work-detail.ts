@@ -8,8 +8,8 @@ export async function workDetail(db: DB, workId: string) {
   if (work?.merged_into) work = await db.selectFrom("works").selectAll().where("id", "=", work.merged_into).executeTakeFirst();
   if (!work) return null;
   const [refs, checks, article] = await Promise.all([
-    sql<{ id: string; raw: string; article_id: string; article_title: string | null; year: number | null; citations: number; with_locator: number }>`
-      select r.id, r.raw, r.article_id, a.title as article_title, a.year,
+    sql<{ id: string; raw: string; article_id: string; article_title: string | null; year: number | null; citations: number; with_locator: number; work_set_by: string }>`
+      select r.id, r.raw, r.article_id, a.title as article_title, a.year, r.work_set_by,
         count(c.id)::int as citations, (count(c.id) filter (where c.locator is not null))::int as with_locator
       from "references" r join articles a on a.id = r.article_id left join citations c on c.reference_id = r.id
       where r.work_id = ${work.id} group by r.id, a.id order by a.year desc nulls last, r.id limit 500`.execute(db),

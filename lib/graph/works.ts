@@ -2,6 +2,7 @@ import { sql, type Transaction } from "kysely";
 import type { DB, Database } from "@/db";
 import type { WorkType } from "@/db/schema/graph";
 import { HttpError } from "@/lib/server/errors";
+import { firstAuthorSurname, normaliseTitle, normaliseYear } from "@/lib/resolve";
 
 type Handle = DB | Transaction<Database>;
 
@@ -30,8 +31,8 @@ export async function setWorkType(db: DB, workId: string, type: WorkType): Promi
 }
 
 /**
- * Merges `fromId` into `intoId`: its references, corpus article and source checks move to the kept
- * work, and the merged work points at it so old links still land. Returns the practices whose trails
+ * Merges `fromId` into `intoId`: its references (marked as placed by a curator), corpus article and
+ * source checks move to the kept work, and the merged work points at it so old links still land. Returns the practices whose trails
  * must be rebuilt (all: a merge can join two chains anywhere).
  */
 export async function mergeWorks(db: DB, fromId: string, intoId: string): Promise<void> {
@@ -44,7 +45,7 @@ export async function mergeWorks(db: DB, fromId: string, intoId: string): Promis
     if (from.article_id && into.article_id) {
       throw new HttpError(409, "conflict", "Both works are articles of the corpus; two articles cannot be one work. Fix the article metadata instead.", "intoId");
     }
-    await trx.updateTable("references").set({ work_id: intoId }).where("work_id", "=", fromId).execute();
+    await trx.updateTable("references").set({ work_id: intoId, work_set_by: "curator" }).where("work_id", "=", fromId).execute();
     // The DOI index is unique among unmerged works: free it before the kept work takes it.
     await trx.updateTable("works").set({ merged_into: intoId, article_id: null, doi: null }).where("id", "=", fromId).execute();
     await trx
@@ -61,31 +62,35 @@ export async function mergeWorks(db: DB, fromId: string, intoId: string): Promis
 
 /**
  * Splits a wrong match: the given references leave the work for a new work made from the first of
- * them. Returns the new work's id.
+ * them (its title, first author and year, so later references to the same thing can find it).
+ * Returns the new work's id. The moved references are marked as placed by a curator, so
+ * re-resolution does not score them back onto the work they were split from.
  */
 export async function splitWork(db: DB, workId: string, referenceIds: readonly string[]): Promise<string> {
   if (referenceIds.length === 0) throw new HttpError(400, "invalid", "Choose at least one reference to split off.", "referenceIds");
   return db.transaction().execute(async (trx) => {
     const refs = await trx.selectFrom("references").selectAll().where("work_id", "=", workId).where("id", "in", [...referenceIds]).execute();
     if (refs.length !== referenceIds.length) throw new HttpError(400, "invalid", "Some of those references do not belong to this work.", "referenceIds");
+    // An outside work is nothing but its references; one of our articles stays a work without them.
+    const work = await trx.selectFrom("works").select("article_id").where("id", "=", workId).executeTakeFirstOrThrow();
     const left = await trx.selectFrom("references").select(sql<number>`count(*)`.as("n")).where("work_id", "=", workId).where("id", "not in", [...referenceIds]).executeTakeFirstOrThrow();
-    if (Number(left.n) === 0) throw new HttpError(400, "invalid", "Leave at least one reference on the original work.", "referenceIds");
+    if (Number(left.n) === 0 && !work.article_id) throw new HttpError(400, "invalid", "Leave at least one reference on the original work.", "referenceIds");
     const first = refs[0];
     const w = await trx
       .insertInto("works")
       .values({
         doi: null,
         title: first.title,
-        normalised_title: null,
-        first_author: null,
-        year: first.year,
+        normalised_title: first.title ? normaliseTitle(first.title) : null,
+        first_author: firstAuthorSurname(Array.isArray(first.authors) ? first.authors : []),
+        year: normaliseYear(first.year)?.toString() ?? null,
         kind: first.kind,
         article_id: null,
         merged_into: null,
       })
       .returning("id")
       .executeTakeFirstOrThrow();
-    await trx.updateTable("references").set({ work_id: w.id }).where("id", "in", [...referenceIds]).execute();
+    await trx.updateTable("references").set({ work_id: w.id, work_set_by: "curator" }).where("id", "in", [...referenceIds]).execute();
     await typeWorks(trx, [w.id]);
     return w.id;
   });

@@ -216,4 +216,22 @@ describe("curator merge and split", () => {
     expect(new Set(back.map((r) => r.work_id)).size).toBe(1);
     await expect(mergeWorks(db, a.id, a.id)).rejects.toThrow(/different/);
   });
+  it("a reference a curator split off a corpus article stays split when resolution runs again", async () => {
+    // A2's reference "Brennemann & Adeyemi (2018)" resolves to A1 (fixture). Without the curator's
+    // mark, re-resolution prefers the corpus article and would move it straight back to A1.
+    const a1Work = await db.selectFrom("works").select("id").where("article_id", "=", ids.articles.A1).executeTakeFirstOrThrow();
+    const ref = await db.selectFrom("references").select(["id", "work_id"]).where("article_id", "=", ids.articles.A2).where("title", "=", "Brand loyalty in invented coastal towns").executeTakeFirstOrThrow();
+    expect(ref.work_id).toBe(a1Work.id);
+    const split = await splitWork(db, a1Work.id, [ref.id]);
+    const deps: GraphJobDeps = { db: () => db, send: async () => {} };
+    await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
+    const after = await db.selectFrom("references").select(["work_id", "work_set_by"]).where("id", "=", ref.id).executeTakeFirstOrThrow();
+    expect(after).toEqual({ work_id: split, work_set_by: "curator" });
+    // The split-off work carries the reference's title, surname and year for later references.
+    expect(await db.selectFrom("works").select(["first_author", "year"]).where("id", "=", split).executeTakeFirstOrThrow()).toEqual({ first_author: "brennemann", year: "2018" });
+    // Merging it back puts the reference on A1 again, still as the curator's placement.
+    await mergeWorks(db, split, a1Work.id);
+    await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
+    expect(await db.selectFrom("references").select(["work_id", "work_set_by"]).where("id", "=", ref.id).executeTakeFirstOrThrow()).toEqual({ work_id: a1Work.id, work_set_by: "curator" });
+  });
 });

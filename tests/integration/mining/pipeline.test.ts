@@ -133,6 +133,9 @@ describe("mining pipeline", () => {
     expect(before.find((s) => s.sentence.includes("Brandtner, 2003"))!.sourcing).toBe("cited_no_locator");
     expect(before.find((s) => s.sentence === "Reliability above .70 is acceptable.")!.sourcing).toBe("unsourced");
     await h.db.insertInto("statement_reviews").values({ article_id: articleId, fingerprint: before[0].fingerprint, reviewer_id: user.id, verdict: "correct" }).execute();
+    // A curator placed the Brandtner reference on a work by hand (as a split or merge does).
+    const work = await h.db.insertInto("works").values({ title: "Measuring invented constructs", kind: "book", doi: null, normalised_title: null, first_author: "brandtner", year: "2003", article_id: null, merged_into: null }).returning("id").executeTakeFirstOrThrow();
+    await h.db.updateTable("references").set({ work_id: work.id, work_set_by: "curator" }).where("article_id", "=", articleId).where("raw", "like", "Brandtner%").execute();
 
     const boss = await senderFor(h.db);
     await h.db.transaction().execute((trx) => queueArticle(trx, boss, articleId, "remine"));
@@ -147,6 +150,10 @@ describe("mining pipeline", () => {
       .where("statements.article_id", "=", articleId)
       .execute();
     expect(reviewed).toEqual([{ sentence: before[0].sentence, verdict: "correct" }]);
+    // The re-mined Brandtner reference is a new row on the curator's work; the other is not marked.
+    const refs = await h.db.selectFrom("references").select(["raw", "work_id", "work_set_by"]).where("article_id", "=", articleId).orderBy("ordinal").execute();
+    expect(refs.map((r) => [r.raw.slice(0, 9), r.work_set_by])).toEqual([["Brandtner", "curator"], ["Okafor, T", "resolver"]]);
+    expect(refs[0].work_id).toBe(work.id);
     const linked = await h.db.selectFrom("statement_citations").innerJoin("statements", "statements.id", "statement_citations.statement_id").select("statement_id").where("statements.article_id", "=", articleId).execute();
     expect(linked.length).toBeGreaterThanOrEqual(3);
   });

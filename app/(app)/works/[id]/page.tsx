@@ -32,7 +32,7 @@ export default async function WorkPage({ params }: { params: Promise<{ id: strin
       {curator && <SourceCheckForm workId={d.work.id} practices={practices} />}
       <section>
         <h2 className="text-lg font-medium">Cited by ({d.references.length} references)</h2>
-        <ul className="text-sm">{d.references.map((r) => <li key={r.id}><Link className="underline" href={`/articles/${r.article_id}`}>{r.article_title ?? "Untitled"}</Link> ({r.year ?? "n.d."}): {r.citations} in-text citations, {r.with_locator} with a page</li>)}</ul>
+        <ul className="text-sm">{d.references.map((r) => <li key={r.id}><Link className="underline" href={`/articles/${r.article_id}`}>{r.article_title ?? "Untitled"}</Link> ({r.year ?? "n.d."}): {r.citations} in-text citations, {r.with_locator} with a page{r.work_set_by === "curator" && " · placed here by a curator"}</li>)}</ul>
       </section>
       {curator && <CurateWork workId={d.work.id} references={d.references.map((r) => ({ id: r.id, raw: r.raw }))} />}
     </div>
