@@ -60,9 +60,12 @@ if (selected.some((j) => j.name === MINING_QUEUE)) {
 for (const job of selected) {
   if (job.name === MINING_QUEUE) continue;
   await ensureQueue(boss, job);
-  await boss.work(job.name, { localConcurrency: job.concurrency ?? 1, pollingIntervalSeconds: 1 }, async (jobs: Job<object>[]) => {
-    await job.handler(jobs);
-  });
+  const batch = job.batchSize ?? 1;
+  await boss.work(
+    job.name,
+    { localConcurrency: job.concurrency ?? 1, batchSize: batch, burstWhenBatchFull: batch > 1, perJobResults: true, pollingIntervalSeconds: 1 },
+    (jobs: Job<object>[]) => job.handler(jobs),
+  );
   if (job.cron) await boss.schedule(job.name, job.cron, null, { ...job.preset });
 }
 console.log(`[worker] ready (pid ${process.pid}): ${selected.map((j) => j.name).join(", ")}`);

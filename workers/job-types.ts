@@ -1,4 +1,4 @@
-import type { Job } from "pg-boss";
+import type { Job, JobResult } from "pg-boss";
 import { z } from "zod";
 
 /**
@@ -70,5 +70,10 @@ export type JobDefinition<T extends object = object> = {
   concurrency?: number;
   /** Cron schedule (pg-boss `schedule`), if the job also runs periodically. */
   cron?: string;
-  handler: (jobs: Job<T>[]) => Promise<void>;
+  /**
+   * Jobs fetched at once; the worker keeps fetching while batches come back full instead of waiting
+   * out a poll interval per job. Each job of a batch succeeds or fails on its own.
+   */
+  batchSize?: number;
+  handler: (jobs: Job<T>[]) => Promise<JobResult[]>;
 };

@@ -231,34 +231,26 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     }
   }
 
+  async function handleEach(jobs: Job<MiningJobData>[]): Promise<JobResult[]> {
+    const out: JobResult[] = [];
+    for (const job of jobs) {
+      try {
+        await handleOne(job);
+        out.push({ id: job.id, status: "completed" });
+      } catch {
+        out.push({ id: job.id, status: "failed" });
+      }
+    }
+    return out;
+  }
+
   return {
     name: MINING_QUEUE,
     preset: retry,
     concurrency: Number(process.env.ECHOLINE_MINING_CONCURRENCY ?? 1),
     // pg-boss hands a batch; each article is its own unit, so one bad article never fails the others.
-    handler: async (jobs) => {
-      const errors: unknown[] = [];
-      for (const job of jobs) {
-        try {
-          await handleOne(job);
-        } catch (err) {
-          errors.push(err);
-        }
-      }
-      if (errors.length) throw errors[0];
-    },
-    handleEach: async (jobs) => {
-      const out: JobResult[] = [];
-      for (const job of jobs) {
-        try {
-          await handleOne(job);
-          out.push({ id: job.id, status: "completed" });
-        } catch {
-          out.push({ id: job.id, status: "failed" });
-        }
-      }
-      return out;
-    },
+    handler: (jobs) => handleEach(jobs),
+    handleEach: (jobs) => handleEach(jobs),
     handleStopped: async (jobs) => {
       for (const job of jobs) {
         const parsed = JobData.safeParse(job.data);

@@ -65,7 +65,7 @@ export async function startHarness(
     log: quietLog,
     beforeCommit: opts.beforeCommit,
   });
-  await boss.work(MINING_QUEUE, { localConcurrency: opts.concurrency ?? 2, pollingIntervalSeconds: 0.5 }, mining.handler);
+  await boss.work(MINING_QUEUE, { localConcurrency: opts.concurrency ?? 2, perJobResults: true, pollingIntervalSeconds: 0.5 }, mining.handler);
   await boss.work(MINING_STOPPED_QUEUE, { includeMetadata: true, pollingIntervalSeconds: 0.5 }, (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs));
   return {
     db: t.db,
