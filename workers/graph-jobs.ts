@@ -59,9 +59,11 @@ const defaultDeps: GraphJobDeps = {
 };
 
 // Rebuilding a practice's trails walks its whole graph, so many articles mined together share one
-// rebuild: a singleton key per practice with a short window.
-const trailsOnce = (practiceId: string) => ({ singletonKey: practiceId, singletonSeconds: 20 });
-const refreshOnce = { singletonKey: "all", singletonSeconds: 20 };
+// rebuild: a singleton key per practice with a short window. A request that finds the window taken
+// goes into the next one (singletonNextSlot) rather than being dropped: the rebuild already queued or
+// running may have started before this article's rows were there.
+export const trailsOnce = (practiceId: string, seconds = 20) => ({ singletonKey: practiceId, singletonSeconds: seconds, singletonNextSlot: true });
+const refreshOnce = { singletonKey: "all", singletonSeconds: 20, singletonNextSlot: true };
 // An older article that many new ones may cite is re-checked once per 10 s slot, not once per new
 // article (the demo load queued 920 re-checks for 330 articles). A request that finds the slot taken
 // goes into the next slot (singletonNextSlot), so an article arriving after a re-check started still
@@ -143,4 +145,4 @@ export async function onArticleMined(boss: PgBoss, trx: Transaction<Database>, a
 }
 
 /** For route handlers: enqueue work on the app's own sender. */
-export const enqueueGraph = (name: string, data: object, options?: { singletonKey?: string; singletonSeconds?: number }) => defaultDeps.send(name, data, options);
+export const enqueueGraph = (name: string, data: object, options?: Parameters<GraphJobDeps["send"]>[2]) => defaultDeps.send(name, data, options);

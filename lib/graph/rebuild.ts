@@ -1,9 +1,9 @@
 import type { DB } from "@/db";
-import { enqueueGraph, GRAPH_QUEUES } from "@/workers/graph-jobs";
+import { enqueueGraph, GRAPH_QUEUES, trailsOnce } from "@/workers/graph-jobs";
 
 /** After a merge, split or retyping, any practice's trails may change: queue a rebuild of each. */
 export async function rebuildAllSoon(db: DB): Promise<void> {
   for (const p of await db.selectFrom("practices").select("id").execute()) {
-    await enqueueGraph(GRAPH_QUEUES.trails, { practiceId: p.id }, { singletonKey: p.id, singletonSeconds: 5 });
+    await enqueueGraph(GRAPH_QUEUES.trails, { practiceId: p.id }, trailsOnce(p.id, 5));
   }
 }

@@ -7,7 +7,7 @@ import { randomUUID } from "node:crypto";
 import { sql } from "kysely";
 import type { Job } from "pg-boss";
 import { createTestDatabase } from "@/tests/helpers/db";
-import { createGraphJobs, GRAPH_QUEUES, recheckOnce } from "@/workers/graph-jobs";
+import { createGraphJobs, GRAPH_QUEUES, recheckOnce, trailsOnce } from "@/workers/graph-jobs";
 import { senderFor } from "@/lib/corpus/queue";
 
 let t: Awaited<ReturnType<typeof createTestDatabase>>;
@@ -37,6 +37,22 @@ describe("graph jobs", () => {
     // if the six sends happen to straddle a 10 s slot boundary); never one per request.
     expect(n.rows[0].n).toBeGreaterThanOrEqual(2);
     expect(n.rows[0].n).toBeLessThanOrEqual(3);
+    await boss.stop({ graceful: false, close: false });
+  });
+
+  it("never drop a trail rebuild asked for while one is queued: the late request waits for the next window", async () => {
+    // Without the next-slot rule, an article mined just after its practice's rebuild was queued
+    // would keep statements with no trail until some later article asked again.
+    const boss = await senderFor(t.db);
+    await boss.createQueue(GRAPH_QUEUES.trails).catch(() => {});
+    const practiceId = randomUUID();
+    const first = await boss.send(GRAPH_QUEUES.trails, { practiceId }, trailsOnce(practiceId, 5));
+    const late = await boss.send(GRAPH_QUEUES.trails, { practiceId }, trailsOnce(practiceId, 5));
+    expect(first).toBeTruthy();
+    expect(late).toBeTruthy();
+    const rows = await sql<{ start_after: Date; created_on: Date }>`select start_after, created_on from pgboss.job where name = ${GRAPH_QUEUES.trails} and data->>'practiceId' = ${practiceId} order by start_after`.execute(t.db);
+    expect(rows.rows).toHaveLength(2);
+    expect(rows.rows[1].start_after.getTime()).toBeGreaterThan(rows.rows[0].start_after.getTime());
     await boss.stop({ graceful: false, close: false });
   });
 });
