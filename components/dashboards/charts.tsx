@@ -1,6 +1,7 @@
 "use client";
 import { ResponsiveBar } from "@nivo/bar";
 import { ResponsiveLine } from "@nivo/line";
+import { useId } from "react";
 import { SOURCING, SOURCING_ORDER } from "@/components/ui/sourcing";
 import type { Row } from "@/lib/dashboards/csv";
 
@@ -62,24 +63,81 @@ export function ShareLineChart({ rows, prefix = "share" }: { rows: Row[]; prefix
   );
 }
 
-export function SimpleBarChart({ rows, keys, indexBy, percent }: { rows: Row[]; keys: string[]; indexBy: string; percent?: boolean }) {
-  const data = rows.map((r) => Object.fromEntries([[indexBy, String(r[indexBy])], ...keys.map((k) => [k, Number(r[k] ?? 0)])]));
+/** One bar series: the row key it reads, its legend label, and a fill that does not rely on colour alone. */
+export type BarSeries = { key: string; label: string; color: string; pattern?: "solid" | "lines" | "dots" | "cross" };
+
+const seriesDefs = (series: BarSeries[], uid: string) =>
+  series.map((x, i) => {
+    const id = `${uid}-bar-${i}`;
+    if (x.pattern === "dots") return { id, type: "patternDots", background: x.color, color: "var(--paper)", size: 3, padding: 3, stagger: true };
+    if (x.pattern === "lines") return { id, type: "patternLines", background: x.color, color: "var(--paper)", spacing: 5, rotation: -45, lineWidth: 1.5 };
+    if (x.pattern === "cross") return { id, type: "patternLines", background: x.color, color: "var(--paper)", spacing: 5, rotation: 45, lineWidth: 1.5 };
+    return { id, type: "patternLines", background: x.color, color: x.color, spacing: 8, rotation: 0, lineWidth: 0 };
+  });
+
+/** A legend in HTML with the same fills as the bars (nivo's own legend shows only the base colour). */
+function SeriesLegend({ series }: { series: BarSeries[] }) {
+  const uid = useId().replace(/:/g, "");
   return (
-    <div style={{ height: 260 }} aria-hidden="true">
-      <ResponsiveBar
-        data={data}
-        keys={keys}
-        indexBy={indexBy}
-        margin={{ top: 10, right: 170, bottom: 50, left: 50 }}
-        colors={{ scheme: "greys" }}
-        borderColor="var(--ink)"
-        borderWidth={1}
-        valueFormat={percent ? ">-.0%" : undefined}
-        axisLeft={percent ? { format: ">-.0%" } : {}}
-        enableLabel={false}
-        theme={theme}
-        legends={keys.length > 1 ? [{ dataFrom: "keys", anchor: "right", direction: "column", translateX: 160, itemWidth: 150, itemHeight: 18 }] : []}
-      />
+    <ul className="flex flex-wrap gap-x-5 gap-y-1 text-sm text-ink-2" aria-hidden="true">
+      {series.map((x, i) => (
+        <li key={x.key} className="flex items-center gap-1.5">
+          <svg width="14" height="14" viewBox="0 0 14 14">
+            <defs>
+              {x.pattern === "dots" && (
+                <pattern id={`${uid}-${i}`} width="5" height="5" patternUnits="userSpaceOnUse"><rect width="5" height="5" fill={x.color} /><circle cx="2.5" cy="2.5" r="1.2" fill="var(--paper)" /></pattern>
+              )}
+              {(x.pattern === "lines" || x.pattern === "cross") && (
+                <pattern id={`${uid}-${i}`} width="5" height="5" patternUnits="userSpaceOnUse" patternTransform={`rotate(${x.pattern === "lines" ? -45 : 45})`}><rect width="5" height="5" fill={x.color} /><line x1="0" y1="0" x2="0" y2="5" stroke="var(--paper)" strokeWidth="1.5" /></pattern>
+              )}
+            </defs>
+            <rect x="0.5" y="0.5" width="13" height="13" fill={!x.pattern || x.pattern === "solid" ? x.color : `url(#${uid}-${i})`} stroke="var(--ink)" strokeWidth="1" />
+          </svg>
+          {x.label}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/**
+ * Bars for one or more series. `stacked` is only for parts of one whole (shares that add up to 1);
+ * different measures side by side are `grouped`. Long category names (venues) read better with
+ * `horizontal`. Shares are drawn on a 0–100% axis.
+ */
+export function SimpleBarChart({ rows, series, indexBy, percent, mode = "stacked", horizontal, axisLabel }: { rows: Row[]; series: BarSeries[]; indexBy: string; percent?: boolean; mode?: "stacked" | "grouped"; horizontal?: boolean; axisLabel?: string }) {
+  // A horizontal chart draws its first row at the bottom: reverse so the table's first row is on top.
+  const ordered = horizontal ? [...rows].reverse() : rows;
+  // SVG pattern ids are global to the page, and one page can hold several of these charts.
+  const uid = useId().replace(/:/g, "");
+  const data = ordered.map((r) => Object.fromEntries([[indexBy, String(r[indexBy])], ...series.map((x) => [x.label, Number(r[x.key] ?? 0)])]));
+  const format = percent ? ">-.0%" : undefined;
+  const valueAxis = { format, legend: axisLabel, legendPosition: "middle" as const, legendOffset: horizontal ? 36 : -42 };
+  const height = horizontal ? Math.max(160, rows.length * (mode === "grouped" ? 22 * series.length + 14 : 30) + 60) : 260;
+  return (
+    <div className="space-y-2">
+      {series.length > 1 && <SeriesLegend series={series} />}
+      <div style={{ height }} aria-hidden="true">
+        <ResponsiveBar
+          data={data}
+          keys={series.map((x) => x.label)}
+          indexBy={indexBy}
+          layout={horizontal ? "horizontal" : "vertical"}
+          groupMode={mode}
+          valueScale={percent && mode === "stacked" ? { type: "linear", min: 0, max: 1 } : { type: "linear", min: 0 }}
+          margin={horizontal ? { top: 10, right: 30, bottom: 50, left: 280 } : { top: 10, right: 30, bottom: 40, left: 56 }}
+          colors={({ id }) => series.find((x) => x.label === id)?.color ?? "var(--ink-2)"}
+          defs={seriesDefs(series, uid)}
+          fill={series.map((x, i) => ({ match: { id: x.label }, id: `${uid}-bar-${i}` }))}
+          borderColor="var(--ink)"
+          borderWidth={1}
+          valueFormat={format}
+          axisLeft={horizontal ? { tickSize: 0, tickPadding: 8 } : valueAxis}
+          axisBottom={horizontal ? valueAxis : {}}
+          enableLabel={false}
+          theme={theme}
+        />
+      </div>
     </div>
   );
 }

@@ -4,7 +4,8 @@ import { useRouter, useSearchParams } from "next/navigation";
 import { useQuery } from "@tanstack/react-query";
 import type { DashboardPayload } from "@/lib/dashboards";
 import { DataTable } from "./data-table";
-import { ShareLineChart, SimpleBarChart, SourcingByYearChart } from "./charts";
+import { ShareLineChart, SimpleBarChart, SourcingByYearChart, type BarSeries } from "./charts";
+import type { Row } from "@/lib/dashboards/csv";
 import { EmptyState } from "@/components/ui/empty-state";
 import { TrailGraph, type TrailGraphData } from "@/components/trails/trail-graph";
 
@@ -22,7 +23,23 @@ export function useDashboard(name: DashboardKind, search: string) {
   });
 }
 
-const END_KEYS = ["methods_source_share", "empirical_precedent_share", "unclassified_share", "unresolved_share", "no_citation_share"];
+// Where a trail ends, in the words of product.md. The last three are rare (a cycle, the depth limit, a
+// statement whose trail is not built yet) and share one bar segment; the table keeps them apart.
+const END_SERIES: BarSeries[] = [
+  { key: "methods_source_share", label: "methods source", color: "var(--ink)", pattern: "solid" },
+  { key: "empirical_precedent_share", label: "empirical precedent", color: "var(--accent)", pattern: "solid" },
+  { key: "unclassified_share", label: "work not yet typed", color: "var(--accent)", pattern: "lines" },
+  { key: "unresolved_share", label: "unresolved reference", color: "var(--ink-2)", pattern: "dots" },
+  { key: "no_citation_share", label: "no citation", color: "var(--rule)", pattern: "solid" },
+  { key: "other_share", label: "cycle, depth limit or not built", color: "var(--paper-2)", pattern: "cross" },
+];
+const withOtherEnds = (rows: Row[]) => rows.map((r) => ({ ...r, other_share: Number(r.cycle_share ?? 0) + Number(r.depth_limit_share ?? 0) + Number(r.not_built_share ?? 0) }));
+const LENGTH_SERIES: BarSeries[] = [{ key: "statements", label: "statements", color: "var(--ink-2)" }];
+const VENUE_SERIES: BarSeries[] = [
+  { key: "rate", label: "articles asserting it", color: "var(--ink)", pattern: "solid" },
+  { key: "in_venue_share", label: "in-venue precedent", color: "var(--accent)", pattern: "lines" },
+];
+const WORK_TYPE: Record<string, string> = { methods_source: "methods source", empirical: "empirical application", unknown: "not yet typed" };
 
 export function DashboardView({ name }: { name: DashboardKind }) {
   const sp = useSearchParams();
@@ -62,12 +79,12 @@ export function DashboardView({ name }: { name: DashboardKind }) {
         <>
           <section aria-labelledby="c2a">
             <h3 id="c2a" className="font-medium">Where trails end, by year</h3>
-            <SimpleBarChart rows={d.tables.ends.rows} keys={END_KEYS} indexBy="year" percent />
+            <SimpleBarChart rows={withOtherEnds(d.tables.ends.rows)} series={END_SERIES} indexBy="year" percent axisLabel="share of statements" />
             <DataTable id="table-ends" table={d.tables.ends} csvHref={csv("ends")} />
           </section>
           <section aria-labelledby="c2b">
             <h3 id="c2b" className="font-medium">Trail lengths</h3>
-            <SimpleBarChart rows={d.tables.lengths.rows} keys={["statements"]} indexBy="length" />
+            <SimpleBarChart rows={d.tables.lengths.rows} series={LENGTH_SERIES} indexBy="length" axisLabel="statements" />
             <DataTable id="table-lengths" table={d.tables.lengths} csvHref={csv("lengths")} />
           </section>
           <section aria-labelledby="c2c">
@@ -75,7 +92,7 @@ export function DashboardView({ name }: { name: DashboardKind }) {
             <ol className="list-decimal pl-6 text-sm">
               {d.tables.sources.rows.map((r) => (
                 <li key={String(r.work_id)}>
-                  <Link className="underline" href={`/works/${r.work_id}`}>{String(r.title ?? r.first_author ?? "Untitled work")}</Link> ({String(r.year ?? "n.d.")}, {String(r.work_type)}): {String(r.citations)} citations, {Math.round(Number(r.locator_rate) * 100)}% with a page
+                  <Link className="underline" href={`/works/${r.work_id}`}>{String(r.title ?? r.first_author ?? "Untitled work")}</Link> ({String(r.year ?? "n.d.")}, {WORK_TYPE[String(r.work_type)] ?? String(r.work_type)}): {String(r.citations)} citations, {Math.round(Number(r.locator_rate) * 100)}% with a page
                 </li>
               ))}
             </ol>
@@ -88,7 +105,7 @@ export function DashboardView({ name }: { name: DashboardKind }) {
         <section aria-labelledby="c4">
           <h3 id="c4" className="font-medium">Venue rates and in-venue precedent (95% Wilson intervals in the table)</h3>
           <p className="text-sm text-ink-2">In-venue precedent: the share of a venue's citations for this practice that go to its own earlier articles (same venue, not published in a later year).</p>
-          <SimpleBarChart rows={d.tables.venues.rows} keys={["rate", "in_venue_share"]} indexBy="venue" percent />
+          <SimpleBarChart rows={d.tables.venues.rows} series={VENUE_SERIES} indexBy="venue" percent mode="grouped" horizontal />
           <DataTable id="table-venues" table={d.tables.venues} csvHref={csv("venues")} />
         </section>
       )}
