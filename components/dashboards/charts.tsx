@@ -16,49 +16,65 @@ const patternDefs = SOURCING_ORDER.map((s) => {
   return { id: `pat-${s}`, type: "patternLines", background: d.color, color: "var(--paper)", spacing: 5, rotation: 45, lineWidth: 1.5 };
 });
 
+const SOURCING_SERIES = SOURCING_ORDER.map((x) => ({ key: x, label: SOURCING[x].short, color: SOURCING[x].color, pattern: SOURCING[x].pattern }));
+// Both charts of dashboard 1 share these margins so their years line up.
+const YEAR_MARGIN = { top: 10, right: 30, bottom: 40, left: 56 };
+
 /** Dashboard 1: share of articles per year, stacked by sourcing; clicking a bar opens that year's trail graph. */
 export function SourcingByYearChart({ rows, onYear }: { rows: Row[]; onYear?: (year: number) => void }) {
   const data = rows.map((r) => Object.fromEntries([["year", String(r.year)], ...SOURCING_ORDER.map((s) => [SOURCING[s].short, Number(r[`${s}_share`] ?? 0)])]));
   return (
-    <div style={{ height: 320 }} aria-hidden="true">
-      <ResponsiveBar
-        data={data}
-        keys={SOURCING_ORDER.map((s) => SOURCING[s].short)}
-        indexBy="year"
-        margin={{ top: 10, right: 140, bottom: 40, left: 50 }}
-        colors={({ id }) => SOURCING[SOURCING_ORDER.find((s) => SOURCING[s].short === id) ?? "unsourced"].color}
-        defs={patternDefs}
-        fill={SOURCING_ORDER.map((s) => ({ match: { id: SOURCING[s].short }, id: `pat-${s}` }))}
-        valueFormat=">-.0%"
-        axisLeft={{ format: ">-.0%", legend: "share of articles", legendPosition: "middle", legendOffset: -42 }}
-        enableLabel={false}
-        theme={theme}
-        onClick={(d) => onYear?.(Number(d.indexValue))}
-        legends={[{ dataFrom: "keys", anchor: "right", direction: "column", translateX: 130, itemWidth: 120, itemHeight: 18 }]}
-      />
+    <div className="space-y-2">
+      <SeriesLegend series={SOURCING_SERIES} />
+      <div style={{ height: 320 }} aria-hidden="true">
+        <ResponsiveBar
+          data={data}
+          keys={SOURCING_ORDER.map((s) => SOURCING[s].short)}
+          indexBy="year"
+          margin={YEAR_MARGIN}
+          colors={({ id }) => SOURCING[SOURCING_ORDER.find((s) => SOURCING[s].short === id) ?? "unsourced"].color}
+          defs={patternDefs}
+          fill={SOURCING_ORDER.map((s) => ({ match: { id: SOURCING[s].short }, id: `pat-${s}` }))}
+          valueFormat=">-.0%"
+          axisLeft={{ format: ">-.0%", legend: "share of articles", legendPosition: "middle", legendOffset: -46 }}
+          enableLabel={false}
+          theme={theme}
+          onClick={(d) => onYear?.(Number(d.indexValue))}
+        />
+      </div>
     </div>
   );
 }
 
-/** Share asserting with its Wilson interval as dashed bounds. */
+/** The share asserting as a line over its 95% Wilson interval drawn as a band. */
 export function ShareLineChart({ rows, prefix = "share" }: { rows: Row[]; prefix?: string }) {
-  const pts = (k: string) => rows.map((r) => ({ x: String(r.year), y: Number(r[k] ?? 0) }));
+  const pts = rows.map((r) => ({ x: String(r.year), y: Number(r[prefix] ?? 0) }));
+  const band = ({ xScale, yScale }: { xScale: (x: string) => number; yScale: (y: number) => number }) => {
+    const at = (r: Row, k: string) => `${xScale(String(r.year))},${yScale(Number(r[k] ?? 0))}`;
+    if (rows.length === 0) return null;
+    const d = `M${rows.map((r) => at(r, `${prefix}_upper`)).join("L")}L${[...rows].reverse().map((r) => at(r, `${prefix}_lower`)).join("L")}Z`;
+    return <path d={d} fill="var(--rule)" fillOpacity={0.7} stroke="var(--ink-2)" strokeDasharray="3 3" strokeWidth={1} />;
+  };
   return (
-    <div style={{ height: 220 }} aria-hidden="true">
-      <ResponsiveLine
-        data={[
-          { id: "upper 95%", data: pts(`${prefix}_upper`) },
-          { id: "share", data: pts(prefix) },
-          { id: "lower 95%", data: pts(`${prefix}_lower`) },
-        ]}
-        margin={{ top: 10, right: 110, bottom: 40, left: 50 }}
-        yScale={{ type: "linear", min: 0, max: 1 }}
-        axisLeft={{ format: ">-.0%" }}
-        colors={["var(--ink-2)", "var(--accent)", "var(--ink-2)"]}
-        enableSlices="x"
-        theme={theme}
-        legends={[{ anchor: "right", direction: "column", translateX: 100, itemWidth: 90, itemHeight: 18 }]}
-      />
+    <div className="space-y-2">
+      <ul className="flex flex-wrap gap-x-5 text-sm text-ink-2" aria-hidden="true">
+        <li className="flex items-center gap-1.5"><svg width="18" height="10"><line x1="0" y1="5" x2="18" y2="5" stroke="var(--accent)" strokeWidth="2" /></svg>share asserting it</li>
+        <li className="flex items-center gap-1.5"><svg width="18" height="12"><rect x="0.5" y="0.5" width="17" height="11" fill="var(--rule)" stroke="var(--ink-2)" strokeDasharray="3 3" /></svg>95% Wilson interval</li>
+      </ul>
+      <div style={{ height: 220 }} aria-hidden="true">
+        <ResponsiveLine
+          data={[{ id: "share asserting it", data: pts }]}
+          margin={YEAR_MARGIN}
+          yScale={{ type: "linear", min: 0, max: 1 }}
+          axisLeft={{ format: ">-.0%" }}
+          colors={["var(--accent)"]}
+          lineWidth={2}
+          pointSize={5}
+          enableSlices="x"
+          theme={theme}
+          layers={["grid", "axes", band as never, "lines", "points", "slices", "mesh"]}
+        />
+      </div>
     </div>
   );
 }

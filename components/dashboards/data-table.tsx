@@ -4,7 +4,7 @@ import type { Table } from "@/lib/dashboards/queries";
 export function DataTable({ table, csvHref, id }: { table: Table; csvHref: string; id: string }) {
   return (
     <details className="mt-3" open={false}>
-      <summary className="cursor-pointer text-sm text-ink-2">Table view: {table.title} ({table.rows.length} rows)</summary>
+      <summary className="cursor-pointer text-sm text-ink-2">Table view: {table.title} ({table.rows.length} {table.rows.length === 1 ? "row" : "rows"})</summary>
       <div className="mt-2 max-h-96 overflow-auto rounded border border-rule">
         <table className="w-full text-xs" aria-label={table.title} id={id}>
           <thead className="bg-paper-2 sticky top-0">

@@ -71,7 +71,7 @@ export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
   let trend: Table | null = null;
   if (groups.length >= 2) {
     const t = cochranArmitage(groups);
-    notes.push(`${t.describe({ over: "publication years" })} (Cochran–Armitage test for trend, year as score).`);
+    notes.push(`${t.describe({ over: "publication years" }).replace(/\.$/, "")}; Cochran–Armitage test for trend, year as score.`);
     trend = { title: "Cochran–Armitage test for trend", columns: ["z", "chi_square", "p_value", "direction"], rows: [{ z: r4(t.z), chi_square: r4(t.chiSquare), p_value: r4(t.pValue), direction: t.direction }] };
   } else {
     notes.push("A test for trend needs articles from at least two years; widen the year filter.");
