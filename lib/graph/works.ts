@@ -32,8 +32,8 @@ export async function setWorkType(db: DB, workId: string, type: WorkType): Promi
 
 /**
  * Merges `fromId` into `intoId`: its references (marked as placed by a curator), corpus article and
- * source checks move to the kept work, and the merged work points at it so old links still land. Returns the practices whose trails
- * must be rebuilt (all: a merge can join two chains anywhere).
+ * source checks move to the kept work, and the merged work points at it so old links still land.
+ * The caller rebuilds every practice's trails (a merge can join two chains anywhere).
  */
 export async function mergeWorks(db: DB, fromId: string, intoId: string): Promise<void> {
   if (fromId === intoId) throw new HttpError(400, "invalid", "Pick two different works to merge.", "intoId");
