@@ -128,7 +128,7 @@ export function DashboardView({ name }: { name: DashboardKind }) {
       )}
       {name === "trail-graph" && d.graph && (
         <section aria-labelledby="c3">
-          <h3 id="c3" className="font-medium">Trails of this practice, ordered in time (left: older)</h3>
+          <h3 id="c3" className="font-medium">Trails of this practice, ordered in time (left: older; drag to pan, use the − button to see more)</h3>
           <TrailGraph data={d.graph as TrailGraphData} />
           <DataTable id="table-edges" table={d.tables.edges} csvHref={csv("edges")} />
         </section>

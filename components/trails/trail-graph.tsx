@@ -59,8 +59,10 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
   if (data.nodes.length === 0) return <p className="text-ink-2">No trails match these filters.</p>;
   return (
     <div>
-      <div style={{ height: 480 }} className="rounded border border-rule" aria-hidden="true">
-        <ReactFlow nodes={nodes} edges={edges} fitView nodesDraggable={false} onNodeClick={(_, n) => { const h = (n.data as { href?: string }).href; if (h) router.push(h); }}>
+      <div style={{ height: 520 }} className="rounded border border-rule" aria-hidden="true">
+        {/* A practice over decades is far wider than the box: fitting it all would shrink the labels
+            past reading, so the first view stops at a legible zoom; drag to pan, the controls zoom out. */}
+        <ReactFlow nodes={nodes} edges={edges} fitView fitViewOptions={{ minZoom: 0.6 }} minZoom={0.1} nodesDraggable={false} onNodeClick={(_, n) => { const h = (n.data as { href?: string }).href; if (h) router.push(h); }}>
           <Background />
           <Controls />
         </ReactFlow>
