@@ -53,7 +53,7 @@ const selected = only?.length ? all.filter((j) => only.includes(j.name)) : all;
 if (selected.some((j) => j.name === MINING_QUEUE)) {
   // Mining fetches two jobs at a time and keeps fetching while batches come back full: with one job
   // per fetch, each article waited out a poll interval (measured: ~0.9 s idle per article).
-  await boss.work(MINING_QUEUE, { localConcurrency: mining.concurrency ?? 1, batchSize: 2, burstWhenBatchFull: true, perJobResults: true, pollingIntervalSeconds: 1 }, (jobs: Job<MiningJobData>[]) => mining.handleEach(jobs));
+  await boss.work(MINING_QUEUE, { localConcurrency: mining.concurrency ?? 1, batchSize: 2, burstWhenBatchFull: true, perJobResults: true, pollingIntervalSeconds: 1 }, (jobs: Job<MiningJobData>[]) => mining.handler(jobs));
   // Whoever mines also settles the mining jobs that died: their articles end `failed`.
   await boss.work(MINING_STOPPED_QUEUE, { includeMetadata: true, pollingIntervalSeconds: 1 }, (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs));
 }

@@ -50,8 +50,6 @@ export type MiningDeps = {
 export type MiningJob = JobDefinition<MiningJobData> & {
   /** Mines one article; resolves when it is done or failed, rejects only for a retryable error. */
   run(articleId: string, retryCount?: number): Promise<"done" | "failed" | "missing">;
-  /** Settles each job of a batch on its own (pg-boss `perJobResults`): one retry never re-mines the others. */
-  handleEach(jobs: Job<MiningJobData>[]): Promise<JobResult[]>;
   /**
    * Handler of the dead-letter queue (work with `includeMetadata`): a job whose tries all stopped
    * without an outcome (worker crashed, claim expired) marks its article failed. Throws to retry.
@@ -248,9 +246,9 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     name: MINING_QUEUE,
     preset: retry,
     concurrency: Number(process.env.ECHOLINE_MINING_CONCURRENCY ?? 1),
-    // pg-boss hands a batch; each article is its own unit, so one bad article never fails the others.
-    handler: (jobs) => handleEach(jobs),
-    handleEach: (jobs) => handleEach(jobs),
+    // pg-boss hands a batch (work with `perJobResults`); each article is settled on its own, so one
+    // retry never re-mines the others.
+    handler: handleEach,
     handleStopped: async (jobs) => {
       for (const job of jobs) {
         const parsed = JobData.safeParse(job.data);

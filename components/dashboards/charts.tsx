@@ -7,34 +7,27 @@ import type { Row } from "@/lib/dashboards/csv";
 
 const theme = { text: { fill: "var(--ink)" }, axis: { ticks: { text: { fill: "var(--ink-2)" } } }, grid: { line: { stroke: "var(--rule)" } } };
 
-// The sourcing patterns of components/ui/sourcing.ts as nivo SVG defs, so colour is never the only signal.
-const patternDefs = SOURCING_ORDER.map((s) => {
-  const d = SOURCING[s];
-  if (d.pattern === "solid") return { id: `pat-${s}`, type: "patternLines", background: d.color, color: d.color, spacing: 8, rotation: 0, lineWidth: 0 };
-  if (d.pattern === "dots") return { id: `pat-${s}`, type: "patternDots", background: d.color, color: "var(--paper)", size: 3, padding: 3, stagger: true };
-  if (d.pattern === "lines") return { id: `pat-${s}`, type: "patternLines", background: d.color, color: "var(--paper)", spacing: 5, rotation: -45, lineWidth: 1.5 };
-  return { id: `pat-${s}`, type: "patternLines", background: d.color, color: "var(--paper)", spacing: 5, rotation: 45, lineWidth: 1.5 };
-});
-
-const SOURCING_SERIES = SOURCING_ORDER.map((x) => ({ key: x, label: SOURCING[x].short, color: SOURCING[x].color, pattern: SOURCING[x].pattern }));
+// The sourcing colours and patterns of components/ui/sourcing.ts, so colour is never the only signal.
+const SOURCING_SERIES: BarSeries[] = SOURCING_ORDER.map((x) => ({ key: x, label: SOURCING[x].short, color: SOURCING[x].color, pattern: SOURCING[x].pattern }));
 // Both charts of dashboard 1 share these margins so their years line up.
 const YEAR_MARGIN = { top: 10, right: 30, bottom: 40, left: 56 };
 
 /** Dashboard 1: share of articles per year, stacked by sourcing; clicking a bar opens that year's trail graph. */
 export function SourcingByYearChart({ rows, onYear }: { rows: Row[]; onYear?: (year: number) => void }) {
-  const data = rows.map((r) => Object.fromEntries([["year", String(r.year)], ...SOURCING_ORDER.map((s) => [SOURCING[s].short, Number(r[`${s}_share`] ?? 0)])]));
+  const data = rows.map((r) => Object.fromEntries([["year", String(r.year)], ...SOURCING_SERIES.map((x) => [x.label, Number(r[`${x.key}_share`] ?? 0)])]));
+  const uid = useId().replace(/:/g, "");
   return (
     <div className="space-y-2">
       <SeriesLegend series={SOURCING_SERIES} />
       <div style={{ height: 320 }} aria-hidden="true">
         <ResponsiveBar
           data={data}
-          keys={SOURCING_ORDER.map((s) => SOURCING[s].short)}
+          keys={SOURCING_SERIES.map((x) => x.label)}
           indexBy="year"
           margin={YEAR_MARGIN}
-          colors={({ id }) => SOURCING[SOURCING_ORDER.find((s) => SOURCING[s].short === id) ?? "unsourced"].color}
-          defs={patternDefs}
-          fill={SOURCING_ORDER.map((s) => ({ match: { id: SOURCING[s].short }, id: `pat-${s}` }))}
+          colors={({ id }) => SOURCING_SERIES.find((x) => x.label === id)?.color ?? "var(--ink-2)"}
+          defs={seriesDefs(SOURCING_SERIES, uid)}
+          fill={SOURCING_SERIES.map((x, i) => ({ match: { id: x.label }, id: `${uid}-bar-${i}` }))}
           valueFormat=">-.0%"
           axisLeft={{ format: ">-.0%", legend: "share of articles", legendPosition: "middle", legendOffset: -46 }}
           enableLabel={false}
