@@ -38,7 +38,8 @@ function findBinDir(): string | null {
 function ensureBinaries(): string {
   let bin = findBinDir();
   if (bin) return bin;
-  if (!isRoot) throw new Error("PostgreSQL server binaries are missing; install Debian's 'postgresql' package (needs root).");
+  if (!isRoot)
+    throw new Error("PostgreSQL server binaries are missing; install Debian's 'postgresql' package (needs root).");
   console.log("[db] installing Debian's postgresql package …");
   execFileSync("apt-get", ["update", "-qq"], { stdio: "inherit" });
   execFileSync("apt-get", ["install", "-y", "-qq", "postgresql"], {
@@ -90,11 +91,22 @@ export function up(name: ClusterName): void {
   const log = path.join(DATA_DIR, `pg-${name}.log`);
   if (!fs.existsSync(log)) fs.writeFileSync(log, "");
   ownToPostgres(log);
-  const started = runPg(path.join(bin, "pg_ctl"), [
-    "-D", dir, "-l", log, "-w", "-t", "60",
-    "-o", `-c listen_addresses=127.0.0.1 -p ${port} -k ${socketDir} -c max_connections=200 -c shared_buffers=256MB -c fsync=${name === "test" ? "off" : "on"}`,
-    "start",
-  ], { allowFail: true });
+  const started = runPg(
+    path.join(bin, "pg_ctl"),
+    [
+      "-D",
+      dir,
+      "-l",
+      log,
+      "-w",
+      "-t",
+      "60",
+      "-o",
+      `-c listen_addresses=127.0.0.1 -p ${port} -k ${socketDir} -c max_connections=200 -c shared_buffers=256MB -c fsync=${name === "test" ? "off" : "on"}`,
+      "start",
+    ],
+    { allowFail: true },
+  );
   if (started.status !== 0) {
     // Say why (the server's own log), e.g. the port is taken by another checkout's cluster.
     const tail = fs.readFileSync(log, "utf8").trim().split("\n").slice(-4).join("\n");

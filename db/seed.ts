@@ -21,11 +21,24 @@ export const DEMO_ACCOUNTS: { email: string; name: string; role: Role; password:
 
 export async function seedAccounts(db: DB): Promise<void> {
   for (const a of DEMO_ACCOUNTS) {
-    const exists = await db.selectFrom("User").select("id").where(sql`lower(email)`, "=", a.email).executeTakeFirst();
+    const exists = await db
+      .selectFrom("User")
+      .select("id")
+      .where(sql`lower(email)`, "=", a.email)
+      .executeTakeFirst();
     if (exists) continue;
     await db
       .insertInto("User")
-      .values({ email: a.email, name: a.name, role: a.role, password_hash: await hashPassword(a.password), emailVerified: new Date(), image: null, deactivated_at: null, is_demo: true })
+      .values({
+        email: a.email,
+        name: a.name,
+        role: a.role,
+        password_hash: await hashPassword(a.password),
+        emailVerified: new Date(),
+        image: null,
+        deactivated_at: null,
+        is_demo: true,
+      })
       .onConflict((oc) => oc.doNothing())
       .execute();
   }
@@ -35,10 +48,18 @@ export async function seedAccounts(db: DB): Promise<void> {
 export async function seedVenues(db: DB): Promise<void> {
   const ids = await ensureDemoVenues(db, DEMO_VENUES);
   const first = DEMO_VENUES.find((v) => !v.isMethodsVenue);
-  const editor = await db.selectFrom("User").select("id").where("email", "=", "editor@echoline.local").executeTakeFirst();
+  const editor = await db
+    .selectFrom("User")
+    .select("id")
+    .where("email", "=", "editor@echoline.local")
+    .executeTakeFirst();
   const venueId = first && ids.get(first.key);
   if (editor && venueId) {
-    await db.insertInto("editor_venues").values({ user_id: editor.id, venue_id: venueId }).onConflict((oc) => oc.doNothing()).execute();
+    await db
+      .insertInto("editor_venues")
+      .values({ user_id: editor.id, venue_id: venueId })
+      .onConflict((oc) => oc.doNothing())
+      .execute();
   }
 }
 

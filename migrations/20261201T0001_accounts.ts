@@ -84,5 +84,7 @@ export async function up(db: Kysely<unknown>): Promise<void> {
 }
 
 export async function down(db: Kysely<unknown>): Promise<void> {
-  await sql`drop table audit_log, sign_in_attempts, invitations, used_sign_in_links, "VerificationToken", "Session", "Account", "User"`.execute(db);
+  await sql`drop table audit_log, sign_in_attempts, invitations, used_sign_in_links, "VerificationToken", "Session", "Account", "User"`.execute(
+    db,
+  );
 }

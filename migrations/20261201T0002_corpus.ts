@@ -159,5 +159,7 @@ export async function up(db: Kysely<unknown>): Promise<void> {
 }
 
 export async function down(db: Kysely<unknown>): Promise<void> {
-  await sql`drop table procedure_patterns, statement_reviews, statement_citations, citations, "references", statements, articles, upload_batches, stored_files, editor_venues, venues`.execute(db);
+  await sql`drop table procedure_patterns, statement_reviews, statement_citations, citations, "references", statements, articles, upload_batches, stored_files, editor_venues, venues`.execute(
+    db,
+  );
 }

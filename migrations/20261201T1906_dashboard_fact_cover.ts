@@ -6,7 +6,9 @@ import { sql, type Kysely } from "kysely";
 // filter columns plus work_id and has_locator makes it an index-only scan (measured 123 → 68 ms),
 // which lib/graph/summaries.ts keeps possible by vacuuming the views after each refresh.
 export async function up(db: Kysely<unknown>): Promise<void> {
-  await sql`create index dash_citation_facts_year_cover on dash_citation_facts (practice_id, year, venue_id, framing) include (work_id, has_locator)`.execute(db);
+  await sql`create index dash_citation_facts_year_cover on dash_citation_facts (practice_id, year, venue_id, framing) include (work_id, has_locator)`.execute(
+    db,
+  );
 }
 
 export async function down(db: Kysely<unknown>): Promise<void> {

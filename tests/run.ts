@@ -17,7 +17,8 @@ function ensureDebianPackages() {
   if (!fs.existsSync("/usr/bin/chromium")) missing.push("chromium");
   if (!fs.existsSync("/usr/bin/pdftotext")) missing.push("poppler-utils");
   if (!missing.length) return;
-  if (process.getuid?.() !== 0) throw new Error(`Missing Debian packages: ${missing.join(", ")}. Install them with apt-get (needs root).`);
+  if (process.getuid?.() !== 0)
+    throw new Error(`Missing Debian packages: ${missing.join(", ")}. Install them with apt-get (needs root).`);
   step(`installing ${missing.join(", ")}`);
   const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
   execFileSync("apt-get", ["update", "-qq"], { stdio: "inherit", env });
@@ -37,7 +38,10 @@ try {
   step("running vitest");
   code = await new Promise<number>((resolve) => {
     const args = ["run", ...process.argv.slice(2)];
-    const p = spawn("node_modules/.bin/vitest", args, { stdio: "inherit", env: { ...process.env, ECHOLINE_TEMPLATE_READY: "1" } });
+    const p = spawn("node_modules/.bin/vitest", args, {
+      stdio: "inherit",
+      env: { ...process.env, ECHOLINE_TEMPLATE_READY: "1" },
+    });
     p.on("exit", (c) => resolve(c ?? 1));
   });
 } catch (err) {

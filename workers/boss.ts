@@ -12,7 +12,8 @@ export function createWorkerBoss(connectionString: string, opts: { superviseInte
   // little and gets a dead worker's article back to work within ~45 s (heartbeat 30 s + 15 s).
   // ECHOLINE_WORKER_SUPERVISE_SECONDS is for tests that spawn workers and cannot wait that long.
   const supervise = opts.superviseIntervalSeconds ?? Number(process.env.ECHOLINE_WORKER_SUPERVISE_SECONDS ?? 15);
-  if (!Number.isInteger(supervise) || supervise < 1) throw new Error(`ECHOLINE_WORKER_SUPERVISE_SECONDS must be a whole number of seconds >= 1, not ${supervise}`);
+  if (!Number.isInteger(supervise) || supervise < 1)
+    throw new Error(`ECHOLINE_WORKER_SUPERVISE_SECONDS must be a whole number of seconds >= 1, not ${supervise}`);
   // Plain polling (every second, see workers/index.ts), not LISTEN/NOTIFY: jobs are sent through a
   // Kysely transaction by a sender that cannot notify, and a notify-enabled queue then falls back
   // to a slow backstop poll (measured: ~25 s between jobs).
@@ -32,7 +33,11 @@ export function createWorkerBoss(connectionString: string, opts: { superviseInte
 }
 
 /** createQueue must come before send/work; racing processes may both try, which is harmless. */
-export async function ensureQueue(boss: PgBoss, job: Pick<JobDefinition, "name" | "preset">, extra: { notify?: boolean } = {}): Promise<void> {
+export async function ensureQueue(
+  boss: PgBoss,
+  job: Pick<JobDefinition, "name" | "preset">,
+  extra: { notify?: boolean } = {},
+): Promise<void> {
   if (await boss.getQueue(job.name)) return;
   try {
     await boss.createQueue(job.name, { ...job.preset, ...extra });

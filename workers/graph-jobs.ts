@@ -22,7 +22,10 @@ export const GRAPH_QUEUES = {
 
 const resolveSchema = z.object({ articleId: z.uuid(), recheck: z.boolean().optional() });
 const practiceSchema = z.object({ practiceId: z.uuid() });
-export type ResolveJob = { articleId: string; /** true when re-run because a newer article arrived: no further fan-out */ recheck?: boolean };
+export type ResolveJob = {
+  articleId: string;
+  /** true when re-run because a newer article arrived: no further fan-out */ recheck?: boolean;
+};
 export type PracticeJob = { practiceId: string };
 
 const queueOptions = {
@@ -35,7 +38,11 @@ const queueOptions = {
 /** What the handlers need; tests pass their own database and a recording sender. */
 export interface GraphJobDeps {
   db: () => DB;
-  send: (name: string, data: object, options?: { singletonKey?: string; singletonSeconds?: number; singletonNextSlot?: boolean }) => Promise<unknown>;
+  send: (
+    name: string,
+    data: object,
+    options?: { singletonKey?: string; singletonSeconds?: number; singletonNextSlot?: boolean },
+  ) => Promise<unknown>;
 }
 
 async function ensureQueues(boss: PgBoss): Promise<void> {
@@ -62,13 +69,21 @@ const defaultDeps: GraphJobDeps = {
 // rebuild: a singleton key per practice with a short window. A request that finds the window taken
 // goes into the next one (singletonNextSlot) rather than being dropped: the rebuild already queued or
 // running may have started before this article's rows were there.
-export const trailsOnce = (practiceId: string, seconds = 20) => ({ singletonKey: practiceId, singletonSeconds: seconds, singletonNextSlot: true });
+export const trailsOnce = (practiceId: string, seconds = 20) => ({
+  singletonKey: practiceId,
+  singletonSeconds: seconds,
+  singletonNextSlot: true,
+});
 const refreshOnce = { singletonKey: "all", singletonSeconds: 20, singletonNextSlot: true };
 // An older article that many new ones may cite is re-checked once per 10 s slot, not once per new
 // article (the demo load queued 920 re-checks for 330 articles). A request that finds the slot taken
 // goes into the next slot (singletonNextSlot), so an article arriving after a re-check started still
 // gets one that sees it.
-export const recheckOnce = (articleId: string) => ({ singletonKey: `recheck:${articleId}`, singletonSeconds: 10, singletonNextSlot: true });
+export const recheckOnce = (articleId: string) => ({
+  singletonKey: `recheck:${articleId}`,
+  singletonSeconds: 10,
+  singletonNextSlot: true,
+});
 
 export async function handleResolve(deps: GraphJobDeps, data: ResolveJob): Promise<void> {
   const db = deps.db();
@@ -78,14 +93,27 @@ export async function handleResolve(deps: GraphJobDeps, data: ResolveJob): Promi
   const practices = new Set(await matchArticle(db, data.articleId));
   if (!data.recheck) {
     for (const older of await articlesThatMayCite(db, data.articleId)) {
-      await deps.send(GRAPH_QUEUES.resolve, { articleId: older, recheck: true } satisfies ResolveJob, recheckOnce(older));
+      await deps.send(
+        GRAPH_QUEUES.resolve,
+        { articleId: older, recheck: true } satisfies ResolveJob,
+        recheckOnce(older),
+      );
     }
   }
   // An older article's outside work that became this article changes trails of any practice.
   const all = own.adopted ? await db.selectFrom("practices").select("id").execute() : [];
   for (const p of all) practices.add(p.id);
-  if (data.recheck) for (const p of await db.selectFrom("statement_practices").innerJoin("statements", "statements.id", "statement_practices.statement_id").select("practice_id").where("statements.article_id", "=", data.articleId).distinct().execute()) practices.add(p.practice_id);
-  for (const practiceId of practices) await deps.send(GRAPH_QUEUES.trails, { practiceId } satisfies PracticeJob, trailsOnce(practiceId));
+  if (data.recheck)
+    for (const p of await db
+      .selectFrom("statement_practices")
+      .innerJoin("statements", "statements.id", "statement_practices.statement_id")
+      .select("practice_id")
+      .where("statements.article_id", "=", data.articleId)
+      .distinct()
+      .execute())
+      practices.add(p.practice_id);
+  for (const practiceId of practices)
+    await deps.send(GRAPH_QUEUES.trails, { practiceId } satisfies PracticeJob, trailsOnce(practiceId));
   if (practices.size === 0) await deps.send(GRAPH_QUEUES.refresh, {}, refreshOnce);
 }
 
@@ -111,7 +139,13 @@ export function createGraphJobs(deps: GraphJobDeps = defaultDeps): JobDefinition
   return [
     // One at a time (two resolutions at once could each create the same outside work), but fetched
     // in batches: one job per poll measured 1 job/s on the demo corpus, each taking 20–70 ms.
-    { name: GRAPH_QUEUES.resolve, preset: RETRY.graph, concurrency: 1, batchSize: 20, handler: each(GRAPH_QUEUES.resolve, resolveSchema, (d) => handleResolve(deps, d)) },
+    {
+      name: GRAPH_QUEUES.resolve,
+      preset: RETRY.graph,
+      concurrency: 1,
+      batchSize: 20,
+      handler: each(GRAPH_QUEUES.resolve, resolveSchema, (d) => handleResolve(deps, d)),
+    },
     {
       name: GRAPH_QUEUES.matchPractice,
       preset: RETRY.graph,
@@ -129,7 +163,12 @@ export function createGraphJobs(deps: GraphJobDeps = defaultDeps): JobDefinition
       }),
     },
     // Also every 15 minutes, as a backstop for a refresh lost to a crash.
-    { name: GRAPH_QUEUES.refresh, preset: RETRY.housekeeping, cron: "*/15 * * * *", handler: each(GRAPH_QUEUES.refresh, z.object({}), () => refreshSummaries(deps.db())) },
+    {
+      name: GRAPH_QUEUES.refresh,
+      preset: RETRY.housekeeping,
+      cron: "*/15 * * * *",
+      handler: each(GRAPH_QUEUES.refresh, z.object({}), () => refreshSummaries(deps.db())),
+    },
   ];
 }
 
@@ -141,8 +180,13 @@ export const graphJobs: JobDefinition[] = createGraphJobs();
  */
 export async function onArticleMined(boss: PgBoss, trx: Transaction<Database>, articleId: string): Promise<void> {
   await ensureQueues(boss);
-  await boss.send(GRAPH_QUEUES.resolve, { articleId } satisfies ResolveJob, { ...queueOptions, singletonKey: articleId, db: bossDb(trx) });
+  await boss.send(GRAPH_QUEUES.resolve, { articleId } satisfies ResolveJob, {
+    ...queueOptions,
+    singletonKey: articleId,
+    db: bossDb(trx),
+  });
 }
 
 /** For route handlers: enqueue work on the app's own sender. */
-export const enqueueGraph = (name: string, data: object, options?: Parameters<GraphJobDeps["send"]>[2]) => defaultDeps.send(name, data, options);
+export const enqueueGraph = (name: string, data: object, options?: Parameters<GraphJobDeps["send"]>[2]) =>
+  defaultDeps.send(name, data, options);

@@ -40,22 +40,43 @@ const { mining, all } = buildJobs({
   retry,
   // One mining thread per process, warm between documents; the job rebuilds it when the procedure
   // list changes and closes it on shutdown.
-  createMiner: ({ procedures }) => createIsolatedMiner({ procedures, hardTimeoutMs: hardTimeoutSeconds ? hardTimeoutSeconds * 1000 : undefined }),
+  createMiner: ({ procedures }) =>
+    createIsolatedMiner({ procedures, hardTimeoutMs: hardTimeoutSeconds ? hardTimeoutSeconds * 1000 : undefined }),
   // Lets a test kill a worker in the middle of a job: the handler never returns after `reading`.
-  afterReading: testHooks && process.env.ECHOLINE_TEST_WORKER_HANG_AFTER_READING === "1" ? () => new Promise<void>(() => {}) : undefined,
-  onMined: process.env.ECHOLINE_WORKER_TIMINGS === "1" ? (t) => console.log(`[timing] ${JSON.stringify(t)}`) : undefined,
+  afterReading:
+    testHooks && process.env.ECHOLINE_TEST_WORKER_HANG_AFTER_READING === "1"
+      ? () => new Promise<void>(() => {})
+      : undefined,
+  onMined:
+    process.env.ECHOLINE_WORKER_TIMINGS === "1" ? (t) => console.log(`[timing] ${JSON.stringify(t)}`) : undefined,
 });
 
 await ensureMiningQueue(boss, { preset: retry, reconcile: true });
 // ECHOLINE_WORKER_QUEUES=a,b runs only those queues (dedicated mining machines; the benchmark).
-const only = process.env.ECHOLINE_WORKER_QUEUES?.split(",").map((s) => s.trim()).filter(Boolean);
+const only = process.env.ECHOLINE_WORKER_QUEUES?.split(",")
+  .map((s) => s.trim())
+  .filter(Boolean);
 const selected = only?.length ? all.filter((j) => only.includes(j.name)) : all;
 if (selected.some((j) => j.name === MINING_QUEUE)) {
   // Mining fetches two jobs at a time and keeps fetching while batches come back full: with one job
   // per fetch, each article waited out a poll interval (measured: ~0.9 s idle per article).
-  await boss.work(MINING_QUEUE, { localConcurrency: mining.concurrency ?? 1, batchSize: 2, burstWhenBatchFull: true, perJobResults: true, pollingIntervalSeconds: 1 }, (jobs: Job<MiningJobData>[]) => mining.handler(jobs));
+  await boss.work(
+    MINING_QUEUE,
+    {
+      localConcurrency: mining.concurrency ?? 1,
+      batchSize: 2,
+      burstWhenBatchFull: true,
+      perJobResults: true,
+      pollingIntervalSeconds: 1,
+    },
+    (jobs: Job<MiningJobData>[]) => mining.handler(jobs),
+  );
   // Whoever mines also settles the mining jobs that died: their articles end `failed`.
-  await boss.work(MINING_STOPPED_QUEUE, { includeMetadata: true, pollingIntervalSeconds: 1 }, (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs));
+  await boss.work(
+    MINING_STOPPED_QUEUE,
+    { includeMetadata: true, pollingIntervalSeconds: 1 },
+    (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs),
+  );
 }
 for (const job of selected) {
   if (job.name === MINING_QUEUE) continue;
@@ -63,7 +84,13 @@ for (const job of selected) {
   const batch = job.batchSize ?? 1;
   await boss.work(
     job.name,
-    { localConcurrency: job.concurrency ?? 1, batchSize: batch, burstWhenBatchFull: batch > 1, perJobResults: true, pollingIntervalSeconds: 1 },
+    {
+      localConcurrency: job.concurrency ?? 1,
+      batchSize: batch,
+      burstWhenBatchFull: batch > 1,
+      perJobResults: true,
+      pollingIntervalSeconds: 1,
+    },
     (jobs: Job<object>[]) => job.handler(jobs),
   );
   if (job.cron) await boss.schedule(job.name, job.cron, null, { ...job.preset });

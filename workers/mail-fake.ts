@@ -10,7 +10,15 @@ import fs from "node:fs";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
 
-export type CapturedMail = { id: string; at: string; from: string; to: string[]; subject: string; text: string; html: string | null };
+export type CapturedMail = {
+  id: string;
+  at: string;
+  from: string;
+  to: string[];
+  subject: string;
+  text: string;
+  html: string | null;
+};
 
 export function startMailFake(opts: { smtpPort: number; httpPort: number; dir: string }) {
   fs.mkdirSync(opts.dir, { recursive: true });
@@ -40,7 +48,10 @@ export function startMailFake(opts: { smtpPort: number; httpPort: number; dir: s
             html: typeof m.html === "string" ? m.html : null,
           };
           messages.push(mail);
-          fs.writeFileSync(path.join(opts.dir, `${mail.at.replace(/[:.]/g, "-")}-${mail.id}.json`), JSON.stringify(mail));
+          fs.writeFileSync(
+            path.join(opts.dir, `${mail.at.replace(/[:.]/g, "-")}-${mail.id}.json`),
+            JSON.stringify(mail),
+          );
           cb();
         })
         .catch((err: Error) => cb(err));
@@ -49,7 +60,8 @@ export function startMailFake(opts: { smtpPort: number; httpPort: number; dir: s
   smtp.on("error", (err) => console.error("[mail] smtp error:", err.message));
   smtp.listen(opts.smtpPort, "127.0.0.1");
 
-  const esc = (s: string) => s.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
+  const esc = (s: string) =>
+    s.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
   const web = http.createServer((req, res) => {
     const url = new URL(req.url ?? "/", "http://localhost");
     if (url.pathname === "/messages") {
@@ -64,7 +76,10 @@ export function startMailFake(opts: { smtpPort: number; httpPort: number; dir: s
       `<!doctype html><title>Echoline mail fake</title><h1>Captured mail (${messages.length})</h1>` +
         [...messages]
           .reverse()
-          .map((m) => `<article><h2>${esc(m.subject)}</h2><p>To ${esc(m.to.join(", "))} · ${m.at}</p><pre>${esc(m.text)}</pre></article>`)
+          .map(
+            (m) =>
+              `<article><h2>${esc(m.subject)}</h2><p>To ${esc(m.to.join(", "))} · ${m.at}</p><pre>${esc(m.text)}</pre></article>`,
+          )
           .join("<hr>"),
     );
   });

@@ -26,7 +26,10 @@ import { miningPreset, type JobDefinition, type RetryPreset } from "./job-types"
  * the caller must not use `data` afterwards.
  */
 export type MinerLike = {
-  mine(input: { data: Uint8Array; filename: string }): Promise<{ line: unknown; timings?: { readMs: number; mineMs: number }; meta?: unknown }>;
+  mine(input: {
+    data: Uint8Array;
+    filename: string;
+  }): Promise<{ line: unknown; timings?: { readMs: number; mineMs: number }; meta?: unknown }>;
   close(): Promise<void> | void;
 };
 export type MinerFactory = (opts: { procedures: ProcedurePattern[] }) => MinerLike;
@@ -79,7 +82,10 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     if (!miner || miner.key !== key) {
       const old = miner;
       miner = { key, miner: deps.createMiner({ procedures }), users: 0, retired: false };
-      if (old) void retire(old).catch((err) => log.error("[mining] closing the replaced miner failed:", (err as Error).message));
+      if (old)
+        void retire(old).catch((err) =>
+          log.error("[mining] closing the replaced miner failed:", (err as Error).message),
+        );
     }
     miner.users++;
     return miner;
@@ -91,7 +97,11 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
 
   async function setStatus(articleId: string, status: "reading" | "mining" | "queued", message: string | null = null) {
     await db.transaction().execute(async (trx) => {
-      await trx.updateTable("articles").set({ status, updated_at: sql`now()` }).where("id", "=", articleId).execute();
+      await trx
+        .updateTable("articles")
+        .set({ status, updated_at: sql`now()` })
+        .where("id", "=", articleId)
+        .execute();
       await recordEvent(trx, articleId, status === "queued" ? "retry" : status, message);
     });
   }
@@ -101,7 +111,12 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     // A failed article has no mined rows: a re-mine that fails must not leave the old run behind.
     return db.transaction().execute(async (trx) => {
       if (onlyIf) {
-        const a = await trx.selectFrom("articles").select("status").where("id", "=", articleId).forUpdate().executeTakeFirst();
+        const a = await trx
+          .selectFrom("articles")
+          .select("status")
+          .where("id", "=", articleId)
+          .forUpdate()
+          .executeTakeFirst();
         if (!a || !onlyIf.includes(a.status)) return false;
       }
       await trx.deleteFrom("statements").where("article_id", "=", articleId).execute();
@@ -141,7 +156,11 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
       // The miner is meant to turn every bad input into an error line; if it throws instead, the
       // same bytes would throw again, so retrying is pointless.
       log.error(`[mining] miner threw on article ${articleId}:`, err);
-      await fail(articleId, "internal", `The miner stopped on this file (${(err as Error).message ?? "unknown error"}). The error was logged.`);
+      await fail(
+        articleId,
+        "internal",
+        `The miner stopped on this file (${(err as Error).message ?? "unknown error"}). The error was logged.`,
+      );
       return "failed";
     } finally {
       await releaseMiner(held);
@@ -155,7 +174,11 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     if (!parsed.success) {
       const issue = parsed.error.issues[0];
       log.error(`[mining] contract violation on article ${articleId}:`, issue);
-      await fail(articleId, "internal", `The miner's output did not match the mining contract (${issue?.path.join(".")}: ${issue?.message}).`);
+      await fail(
+        articleId,
+        "internal",
+        `The miner's output did not match the mining contract (${issue?.path.join(".")}: ${issue?.message}).`,
+      );
       return "failed";
     }
     const line = parsed.data;
@@ -163,13 +186,22 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
     const t0 = performance.now();
     await db.transaction().execute(async (trx) => {
       // Serialises two workers that got two jobs for the same article (a re-mine during a mine).
-      const locked = await trx.selectFrom("articles").select(["id", "title", "authors", "year", "doi", "licence", "venue_id"]).where("id", "=", articleId).forUpdate().executeTakeFirst();
+      const locked = await trx
+        .selectFrom("articles")
+        .select(["id", "title", "authors", "year", "doi", "licence", "venue_id"])
+        .where("id", "=", articleId)
+        .forUpdate()
+        .executeTakeFirst();
       if (!locked) return;
       await replaceMinedRows(trx, articleId, line);
       // A metadata file's entry (matched by the document's DOI) wins over the document's own claims.
       const docDoi = (result.meta as { doi?: string | null } | undefined)?.doi ?? null;
       await applyBatchMetadataByDoi(trx, articleId, locked.doi ?? docDoi);
-      const current = await trx.selectFrom("articles").select(["title", "authors", "year", "doi", "licence", "venue_id"]).where("id", "=", articleId).executeTakeFirstOrThrow();
+      const current = await trx
+        .selectFrom("articles")
+        .select(["title", "authors", "year", "doi", "licence", "venue_id"])
+        .where("id", "=", articleId)
+        .executeTakeFirstOrThrow();
       const metaUpdate = await documentMetaUpdate(trx, current, result.meta);
       await trx
         .updateTable("articles")
@@ -185,11 +217,22 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
         })
         .where("id", "=", articleId)
         .execute();
-      await recordEvent(trx, articleId, "done", `${line.statements.length} statements, ${line.citations.length} citations, ${line.references.length} references from ${line.pages} pages.`);
+      await recordEvent(
+        trx,
+        articleId,
+        "done",
+        `${line.statements.length} statements, ${line.citations.length} citations, ${line.references.length} references from ${line.pages} pages.`,
+      );
       await onArticleMined(deps.boss, trx, articleId);
       if (deps.beforeCommit) await deps.beforeCommit(trx, articleId);
     });
-    deps.onMined?.({ articleId, pages: line.pages, readMs: result.timings?.readMs ?? 0, mineMs: result.timings?.mineMs ?? 0, storeMs: performance.now() - t0 });
+    deps.onMined?.({
+      articleId,
+      pages: line.pages,
+      readMs: result.timings?.readMs ?? 0,
+      mineMs: result.timings?.mineMs ?? 0,
+      storeMs: performance.now() - t0,
+    });
     return "done";
   }
 
@@ -207,7 +250,12 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
       // or its claim expired). Say so in the article's history before trying again.
       const a = await db.selectFrom("articles").select("status").where("id", "=", articleId).executeTakeFirst();
       if (a && (a.status === "reading" || a.status === "mining")) {
-        await recordEvent(db, articleId, "retry", `Try ${job.retryCount} of ${limit + 1} stopped without finishing (worker crashed or timed out); trying again.`);
+        await recordEvent(
+          db,
+          articleId,
+          "retry",
+          `Try ${job.retryCount} of ${limit + 1} stopped without finishing (worker crashed or timed out); trying again.`,
+        );
       }
     }
     try {
@@ -265,7 +313,12 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
         const tries = (job.sourceRetryCount ?? limit) + 1;
         // Only an article still in progress: one the handler already failed (a retryable error on
         // the last try lands here too) keeps the reason it was given.
-        const marked = await fail(articleId, "stopped", `Mining stopped ${tries} ${tries === 1 ? "time" : "times"} without finishing (worker crashed or timed out).`, ["queued", "reading", "mining"]);
+        const marked = await fail(
+          articleId,
+          "stopped",
+          `Mining stopped ${tries} ${tries === 1 ? "time" : "times"} without finishing (worker crashed or timed out).`,
+          ["queued", "reading", "mining"],
+        );
         if (marked) log.warn(`[mining] article ${articleId}: ${tries} tries stopped without finishing; marked failed.`);
       }
     },

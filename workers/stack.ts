@@ -50,7 +50,11 @@ export function stackEnv(cfg: StackConfig): NodeJS.ProcessEnv {
 
 export function runBuild(env: NodeJS.ProcessEnv = process.env): Promise<void> {
   return new Promise((resolve, reject) => {
-    const p = spawn(bin("next"), ["build"], { cwd: ROOT, env: { ...env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production" }, stdio: "inherit" });
+    const p = spawn(bin("next"), ["build"], {
+      cwd: ROOT,
+      env: { ...env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production" },
+      stdio: "inherit",
+    });
     p.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`next build failed (${code})`))));
   });
 }
@@ -63,7 +67,12 @@ export async function startStack(cfg: StackConfig): Promise<Stack> {
   const start = (name: string, cmd: string, args: string[]) => {
     const child = spawn(cmd, args, { cwd: ROOT, env, stdio: ["ignore", "pipe", "pipe"] });
     const prefix = (chunk: Buffer) =>
-      chunk.toString().split("\n").filter(Boolean).map((l) => (l.startsWith(`[${name}]`) ? l : `[${name}] ${l}`)).join("\n") + "\n";
+      chunk
+        .toString()
+        .split("\n")
+        .filter(Boolean)
+        .map((l) => (l.startsWith(`[${name}]`) ? l : `[${name}] ${l}`))
+        .join("\n") + "\n";
     child.stdout?.on("data", (c: Buffer) => !cfg.quiet && process.stdout.write(prefix(c)));
     child.stderr?.on("data", (c: Buffer) => process.stderr.write(prefix(c)));
     child.on("exit", (code, signal) => {

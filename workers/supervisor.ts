@@ -44,13 +44,19 @@ try {
   await db.destroy();
   if (process.env.ECHOLINE_SKIP_BUILD !== "1") await runBuild(process.env);
   stack = await startStack(cfg);
-  console.log(`\n[echoline] ready in ${((Date.now() - t0) / 1000).toFixed(1)} s at http://localhost:${cfg.appPort}  (mail fake: http://localhost:${cfg.mailHttpPort}/, data: ${path.relative(process.cwd(), DATA_DIR)}/)`);
+  console.log(
+    `\n[echoline] ready in ${((Date.now() - t0) / 1000).toFixed(1)} s at http://localhost:${cfg.appPort}  (mail fake: http://localhost:${cfg.mailHttpPort}/, data: ${path.relative(process.cwd(), DATA_DIR)}/)`,
+  );
   console.log("[echoline] demo accounts are listed in README.md; Ctrl-C stops everything.");
   if (process.env.ECHOLINE_DEMO !== "0") {
     // Through the real pipeline: the files are ingested and the worker mines them in the background.
     const demoDb = createDb(cfg.databaseUrl, 2);
     loadDemoCorpus(demoDb, { cacheDir: path.join(DATA_DIR, "demo"), log: (s) => console.log(`[demo] ${s}`) })
-      .then((r) => console.log(`[demo] invented demo corpus: ${r.created} new articles queued for mining, ${r.skipped} already loaded`))
+      .then((r) =>
+        console.log(
+          `[demo] invented demo corpus: ${r.created} new articles queued for mining, ${r.skipped} already loaded`,
+        ),
+      )
       .catch((err) => console.error("[demo] could not load the demo corpus:", err instanceof Error ? err.message : err))
       // The loader's job sender polls through this handle: stop it before closing the pool.
       .finally(async () => {

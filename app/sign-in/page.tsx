@@ -10,7 +10,9 @@ export default async function SignInPage() {
   return (
     <main id="main" className="mx-auto w-full max-w-md px-4 py-12">
       <h1 className="font-serif text-3xl font-semibold">Sign in to Echoline</h1>
-      <p className="mt-2 text-ink-2">Echoline is for invited people. Ask an admin for an invitation if you have none.</p>
+      <p className="mt-2 text-ink-2">
+        Echoline is for invited people. Ask an admin for an invitation if you have none.
+      </p>
       <SignInForms />
     </main>
   );

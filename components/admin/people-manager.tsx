@@ -7,12 +7,24 @@ import { ROLES } from "@/db/schema/accounts";
 import { Field, FormError } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 
-type User = { id: string; email: string; name: string | null; role: string; active: boolean; hasPassword: boolean; invitationPending: boolean; venueIds: string[] };
+type User = {
+  id: string;
+  email: string;
+  name: string | null;
+  role: string;
+  active: boolean;
+  hasPassword: boolean;
+  invitationPending: boolean;
+  venueIds: string[];
+};
 type Venue = { id: string; name: string };
 
 export function PeopleManager({ selfId }: { selfId: string }) {
   const qc = useQueryClient();
-  const users = useQuery({ queryKey: ["admin", "users"], queryFn: () => fetchJson<{ users: User[] }>("/api/admin/users") });
+  const users = useQuery({
+    queryKey: ["admin", "users"],
+    queryFn: () => fetchJson<{ users: User[] }>("/api/admin/users"),
+  });
   const venues = useQuery({ queryKey: ["venues"], queryFn: () => fetchJson<{ venues: Venue[] }>("/api/venues") });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [rowError, setRowError] = useState<string>();
@@ -27,7 +39,8 @@ export function PeopleManager({ selfId }: { selfId: string }) {
     onError: (e) => setErrors(formErrorsOf(e)),
   });
   const patch = useMutation({
-    mutationFn: ({ id, body }: { id: string; body: unknown }) => fetchJson(`/api/admin/users/${id}`, { method: "PATCH", json: body }),
+    mutationFn: ({ id, body }: { id: string; body: unknown }) =>
+      fetchJson(`/api/admin/users/${id}`, { method: "PATCH", json: body }),
     onSuccess: () => {
       setRowError(undefined);
       qc.invalidateQueries({ queryKey: ["admin", "users"] });
@@ -38,14 +51,20 @@ export function PeopleManager({ selfId }: { selfId: string }) {
   return (
     <>
       <section aria-labelledby="invite-h" className="rounded-lg border border-rule bg-paper-2 p-4">
-        <h2 id="invite-h" className="font-semibold">Invite a person</h2>
+        <h2 id="invite-h" className="font-semibold">
+          Invite a person
+        </h2>
         <form
           noValidate
           className="mt-3 grid gap-3 sm:grid-cols-[2fr_1fr_auto] sm:items-start"
           onSubmit={(e) => {
             e.preventDefault();
             const f = new FormData(e.currentTarget);
-            const parsed = inviteSchema.safeParse({ email: f.get("email"), role: f.get("role"), venueIds: f.getAll("venueIds") });
+            const parsed = inviteSchema.safeParse({
+              email: f.get("email"),
+              role: f.get("role"),
+              venueIds: f.getAll("venueIds"),
+            });
             if (!parsed.success) return setErrors(fieldErrors(parsed.error));
             setErrors({});
             setSent(undefined);
@@ -55,30 +74,55 @@ export function PeopleManager({ selfId }: { selfId: string }) {
         >
           <Field label="E-mail" name="email" type="email" error={errors.email} />
           <div className="grid gap-1">
-            <label htmlFor="invite-role" className="text-sm font-medium">Role</label>
-            <select id="invite-role" name="role" defaultValue="reader" className="rounded border border-rule bg-paper px-2 py-1.5">
-              {ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
+            <label htmlFor="invite-role" className="text-sm font-medium">
+              Role
+            </label>
+            <select
+              id="invite-role"
+              name="role"
+              defaultValue="reader"
+              className="rounded border border-rule bg-paper px-2 py-1.5"
+            >
+              {ROLES.map((r) => (
+                <option key={r} value={r}>
+                  {r}
+                </option>
+              ))}
             </select>
-            <p className="text-sm text-accent min-h-[1.25rem]" aria-live="polite">{errors.role ?? ""}</p>
+            <p className="text-sm text-accent min-h-[1.25rem]" aria-live="polite">
+              {errors.role ?? ""}
+            </p>
           </div>
-          <Button type="submit" className="sm:mt-6" disabled={invite.isPending}>Send invitation</Button>
+          <Button type="submit" className="sm:mt-6" disabled={invite.isPending}>
+            Send invitation
+          </Button>
           {venues.data && venues.data.venues.length > 0 && (
             <fieldset className="sm:col-span-3">
               <legend className="text-sm font-medium">Venues (for editors)</legend>
               <div className="mt-1 flex flex-wrap gap-3 text-sm">
                 {venues.data.venues.map((v) => (
-                  <label key={v.id} className="inline-flex items-center gap-1"><input type="checkbox" name="venueIds" value={v.id} /> {v.name}</label>
+                  <label key={v.id} className="inline-flex items-center gap-1">
+                    <input type="checkbox" name="venueIds" value={v.id} /> {v.name}
+                  </label>
                 ))}
               </div>
             </fieldset>
           )}
-          <div className="sm:col-span-3"><FormError message={errors.form} /></div>
+          <div className="sm:col-span-3">
+            <FormError message={errors.form} />
+          </div>
         </form>
-        {sent && <p role="status" className="text-sm">Invitation sent to {sent}.</p>}
+        {sent && (
+          <p role="status" className="text-sm">
+            Invitation sent to {sent}.
+          </p>
+        )}
       </section>
 
       <section aria-labelledby="people-h">
-        <h2 id="people-h" className="font-semibold">Everyone</h2>
+        <h2 id="people-h" className="font-semibold">
+          Everyone
+        </h2>
         <FormError message={rowError} />
         {users.isPending ? (
           <p role="status">Loading people …</p>
@@ -87,14 +131,27 @@ export function PeopleManager({ selfId }: { selfId: string }) {
         ) : (
           <table className="mt-2 w-full text-sm">
             <thead className="text-left text-ink-2">
-              <tr><th className="py-1">Person</th><th>Role</th><th>Status</th><th><span className="sr-only">Actions</span></th></tr>
+              <tr>
+                <th className="py-1">Person</th>
+                <th>Role</th>
+                <th>Status</th>
+                <th>
+                  <span className="sr-only">Actions</span>
+                </th>
+              </tr>
             </thead>
             <tbody>
               {users.data.users.map((u) => (
                 <tr key={u.id} className="border-t border-rule" data-testid={`person-${u.email}`}>
-                  <td className="py-2">{u.name ?? <em className="text-ink-2">no name yet</em>}<br /><span className="text-ink-2">{u.email}</span></td>
+                  <td className="py-2">
+                    {u.name ?? <em className="text-ink-2">no name yet</em>}
+                    <br />
+                    <span className="text-ink-2">{u.email}</span>
+                  </td>
                   <td>
-                    <label className="sr-only" htmlFor={`role-${u.id}`}>Role of {u.email}</label>
+                    <label className="sr-only" htmlFor={`role-${u.id}`}>
+                      Role of {u.email}
+                    </label>
                     <select
                       id={`role-${u.id}`}
                       value={u.role}
@@ -102,13 +159,20 @@ export function PeopleManager({ selfId }: { selfId: string }) {
                       className="rounded border border-rule bg-paper px-1 py-0.5"
                       onChange={(e) => patch.mutate({ id: u.id, body: { role: e.target.value } })}
                     >
-                      {ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
+                      {ROLES.map((r) => (
+                        <option key={r} value={r}>
+                          {r}
+                        </option>
+                      ))}
                     </select>
                   </td>
                   <td>{u.active ? (u.invitationPending ? "invited" : "active") : "deactivated"}</td>
                   <td className="text-right">
                     {u.id !== selfId && (
-                      <Button variant={u.active ? "danger" : "quiet"} onClick={() => patch.mutate({ id: u.id, body: { active: !u.active } })}>
+                      <Button
+                        variant={u.active ? "danger" : "quiet"}
+                        onClick={() => patch.mutate({ id: u.id, body: { active: !u.active } })}
+                      >
                         {u.active ? "Deactivate" : "Reactivate"}
                       </Button>
                     )}

@@ -10,7 +10,15 @@ function valuePatterns(value: number): RegExp {
   return new RegExp(`(?<![\\d.])${intPart}${fracPart}(?![\\d])`);
 }
 
-export function Evidence({ sentence, value, citations }: { sentence: string; value: number | null; citations: Cite[] }) {
+export function Evidence({
+  sentence,
+  value,
+  citations,
+}: {
+  sentence: string;
+  value: number | null;
+  citations: Cite[];
+}) {
   const ranges: { start: number; end: number; kind: "value" | "cite" }[] = [];
   for (const c of citations) {
     const first = c.authors.split(/[\s,&]+/).find((w) => w.length > 1);
@@ -23,7 +31,8 @@ export function Evidence({ sentence, value, citations }: { sentence: string; val
   }
   if (value !== null) {
     const m = valuePatterns(value).exec(sentence);
-    if (m && !ranges.some((r) => m.index < r.end && m.index + m[0].length > r.start)) ranges.push({ start: m.index, end: m.index + m[0].length, kind: "value" });
+    if (m && !ranges.some((r) => m.index < r.end && m.index + m[0].length > r.start))
+      ranges.push({ start: m.index, end: m.index + m[0].length, kind: "value" });
   }
   ranges.sort((a, b) => a.start - b.start);
   const parts: React.ReactNode[] = [];

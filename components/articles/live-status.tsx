@@ -6,7 +6,15 @@ import { STATUS_LABEL, isFinished } from "@/components/upload/status";
 import type { ArticleStatus } from "@/db/schema/corpus";
 
 /** The article's status, polled while it is unfinished; the page re-renders when mining ends. */
-export function LiveStatus({ articleId, initial, reason }: { articleId: string; initial: ArticleStatus; reason: string | null }) {
+export function LiveStatus({
+  articleId,
+  initial,
+  reason,
+}: {
+  articleId: string;
+  initial: ArticleStatus;
+  reason: string | null;
+}) {
   const router = useRouter();
   const q = useQuery({
     queryKey: ["article-status", articleId],
@@ -30,7 +38,9 @@ export function LiveStatus({ articleId, initial, reason }: { articleId: string; 
       <span className={`font-medium ${status === "failed" ? "text-accent" : ""}`} data-testid="article-status">
         {STATUS_LABEL[status]}
       </span>
-      {status === "failed" && q.data?.failure_message && <span className="ml-2 text-ink-2">{q.data.failure_message}</span>}
+      {status === "failed" && q.data?.failure_message && (
+        <span className="ml-2 text-ink-2">{q.data.failure_message}</span>
+      )}
     </p>
   );
 }

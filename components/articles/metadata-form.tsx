@@ -4,7 +4,14 @@ import { useRouter } from "next/navigation";
 import { ArticleMetadataInput } from "@/lib/corpus/schemas";
 
 type Venue = { id: string; name: string };
-type Initial = { title: string | null; authors: string[]; venueId: string | null; year: number | null; doi: string | null; licence: string | null };
+type Initial = {
+  title: string | null;
+  authors: string[];
+  venueId: string | null;
+  year: number | null;
+  doi: string | null;
+  licence: string | null;
+};
 type Field = "title" | "authors" | "venueId" | "year" | "doi" | "licence";
 
 export function MetadataForm({ articleId, initial, venues }: { articleId: string; initial: Initial; venues: Venue[] }) {
@@ -21,7 +28,10 @@ export function MetadataForm({ articleId, initial, venues }: { articleId: string
     const yearText = String(fd.get("year") ?? "").trim();
     const input = {
       title: String(fd.get("title") ?? ""),
-      authors: String(fd.get("authors") ?? "").split("\n").map((a) => a.trim()).filter(Boolean),
+      authors: String(fd.get("authors") ?? "")
+        .split("\n")
+        .map((a) => a.trim())
+        .filter(Boolean),
       venueId: String(fd.get("venueId") ?? "") || null,
       year: yearText === "" ? null : Number(yearText),
       doi: String(fd.get("doi") ?? ""),
@@ -36,7 +46,11 @@ export function MetadataForm({ articleId, initial, venues }: { articleId: string
     }
     setErrors({});
     setBusy(true);
-    const res = await fetch(`/api/articles/${articleId}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(input) });
+    const res = await fetch(`/api/articles/${articleId}`, {
+      method: "PATCH",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify(input),
+    });
     setBusy(false);
     if (res.ok) {
       setSaved("Saved.");
@@ -106,7 +120,9 @@ export function MetadataForm({ articleId, initial, venues }: { articleId: string
         <button type="submit" disabled={busy} className="rounded bg-ink px-3 py-1.5 text-paper disabled:opacity-60">
           Save metadata
         </button>
-        <span aria-live="polite" className="text-sm">{saved}</span>
+        <span aria-live="polite" className="text-sm">
+          {saved}
+        </span>
       </div>
     </form>
   );

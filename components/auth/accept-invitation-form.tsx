@@ -22,17 +22,31 @@ export function AcceptInvitationForm({ token }: { token: string }) {
       onSubmit={(e) => {
         e.preventDefault();
         const f = new FormData(e.currentTarget);
-        const parsed = acceptInvitationSchema.safeParse({ token, name: f.get("name"), password: f.get("password"), confirm: f.get("confirm") });
+        const parsed = acceptInvitationSchema.safeParse({
+          token,
+          name: f.get("name"),
+          password: f.get("password"),
+          confirm: f.get("confirm"),
+        });
         if (!parsed.success) return setErrors(fieldErrors(parsed.error));
         setErrors({});
         accept.mutate(parsed.data);
       }}
     >
       <Field label="Your name" name="name" autoComplete="name" error={errors.name} />
-      <Field label="Password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.password} />
+      <Field
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        error={errors.password}
+      />
       <Field label="Password again" name="confirm" type="password" autoComplete="new-password" error={errors.confirm} />
       <FormError message={errors.form} />
-      <Button type="submit" disabled={accept.isPending}>Set password</Button>
+      <Button type="submit" disabled={accept.isPending}>
+        Set password
+      </Button>
     </form>
   );
 }

@@ -50,16 +50,30 @@ export function SignInForms() {
   return (
     <div className="mt-8 grid gap-10">
       <form onSubmit={onPassword} noValidate className="grid gap-2" aria-labelledby="pw-h">
-        <h2 id="pw-h" className="font-semibold">With your password</h2>
+        <h2 id="pw-h" className="font-semibold">
+          With your password
+        </h2>
         <Field label="E-mail" name="email" type="email" autoComplete="email" error={errors.email} />
-        <Field label="Password" name="password" type="password" autoComplete="current-password" error={errors.password} />
+        <Field
+          label="Password"
+          name="password"
+          type="password"
+          autoComplete="current-password"
+          error={errors.password}
+        />
         <FormError message={errors.form} />
-        <Button type="submit" disabled={busy}>Sign in</Button>
+        <Button type="submit" disabled={busy}>
+          Sign in
+        </Button>
       </form>
       <form onSubmit={onLink} noValidate className="grid gap-2 border-t border-rule pt-6" aria-labelledby="link-h">
-        <h2 id="link-h" className="font-semibold">With a link by e-mail</h2>
+        <h2 id="link-h" className="font-semibold">
+          With a link by e-mail
+        </h2>
         <Field label="E-mail for the link" name="email" type="email" autoComplete="email" error={linkErrors.email} />
-        <Button type="submit" variant="quiet" disabled={busy}>E-mail me a sign-in link</Button>
+        <Button type="submit" variant="quiet" disabled={busy}>
+          E-mail me a sign-in link
+        </Button>
       </form>
     </div>
   );

@@ -11,11 +11,22 @@ export function DashboardTabs({ current, search }: { current: string; search: st
   return (
     <nav aria-label="Dashboards" className="flex flex-wrap gap-2 border-b border-rule pb-2">
       {DASHBOARD_TABS.map((t) => (
-        <Link key={t.name} href={`/dashboards/${t.name}${search ? `?${search}` : ""}`} aria-current={t.name === current ? "page" : undefined} className={`rounded px-3 py-1 ${t.name === current ? "bg-ink text-paper" : "hover:bg-paper-2"}`}>
+        <Link
+          key={t.name}
+          href={`/dashboards/${t.name}${search ? `?${search}` : ""}`}
+          aria-current={t.name === current ? "page" : undefined}
+          className={`rounded px-3 py-1 ${t.name === current ? "bg-ink text-paper" : "hover:bg-paper-2"}`}
+        >
           {t.label}
         </Link>
       ))}
-      <Link href={`/trails${search ? `?${search}` : ""}`} aria-current={current === "trail-graph" ? "page" : undefined} className={`rounded px-3 py-1 ${current === "trail-graph" ? "bg-ink text-paper" : "hover:bg-paper-2"}`}>Trail graph</Link>
+      <Link
+        href={`/trails${search ? `?${search}` : ""}`}
+        aria-current={current === "trail-graph" ? "page" : undefined}
+        className={`rounded px-3 py-1 ${current === "trail-graph" ? "bg-ink text-paper" : "hover:bg-paper-2"}`}
+      >
+        Trail graph
+      </Link>
     </nav>
   );
 }

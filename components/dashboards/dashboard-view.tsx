@@ -33,23 +33,46 @@ const END_SERIES: BarSeries[] = [
   { key: "no_citation_share", label: "no citation", color: "var(--rule)", pattern: "solid" },
   { key: "other_share", label: "cycle, depth limit or not built", color: "var(--paper-2)", pattern: "cross" },
 ];
-const withOtherEnds = (rows: Row[]) => rows.map((r) => ({ ...r, other_share: Number(r.cycle_share ?? 0) + Number(r.depth_limit_share ?? 0) + Number(r.not_built_share ?? 0) }));
+const withOtherEnds = (rows: Row[]) =>
+  rows.map((r) => ({
+    ...r,
+    other_share: Number(r.cycle_share ?? 0) + Number(r.depth_limit_share ?? 0) + Number(r.not_built_share ?? 0),
+  }));
 const LENGTH_SERIES: BarSeries[] = [{ key: "statements", label: "statements", color: "var(--ink-2)" }];
 const VENUE_SERIES: BarSeries[] = [
   { key: "rate", label: "articles asserting it", color: "var(--ink)", pattern: "solid" },
   { key: "in_venue_share", label: "in-venue precedent", color: "var(--accent)", pattern: "lines" },
 ];
-const WORK_TYPE: Record<string, string> = { methods_source: "methods source", empirical: "empirical application", unknown: "not yet typed" };
+const WORK_TYPE: Record<string, string> = {
+  methods_source: "methods source",
+  empirical: "empirical application",
+  unknown: "not yet typed",
+};
 
 export function DashboardView({ name }: { name: DashboardKind }) {
   const sp = useSearchParams();
   const router = useRouter();
   const search = sp.toString();
   const q = useDashboard(name, search);
-  if (q.isPending) return <p role="status" className="mt-6 text-ink-2">Loading the dashboard…</p>;
-  if (q.isError) return <p role="alert" className="mt-6 text-accent">{q.error.message} Change a filter or reload the page.</p>;
+  if (q.isPending)
+    return (
+      <p role="status" className="mt-6 text-ink-2">
+        Loading the dashboard…
+      </p>
+    );
+  if (q.isError)
+    return (
+      <p role="alert" className="mt-6 text-accent">
+        {q.error.message} Change a filter or reload the page.
+      </p>
+    );
   const d = q.data;
-  if (!d.practice) return <EmptyState title="No practice to show yet" action={{ href: "/practices", label: "Define a practice" }}>Dashboards follow a practice. Define one, or clear the statistic filter.</EmptyState>;
+  if (!d.practice)
+    return (
+      <EmptyState title="No practice to show yet" action={{ href: "/practices", label: "Define a practice" }}>
+        Dashboards follow a practice. Define one, or clear the statistic filter.
+      </EmptyState>
+    );
   const csv = (table: string) => `/api/dashboards/${name}?${search ? `${search}&` : ""}format=csv&table=${table}`;
   const openTrails = (year?: number) => {
     const next = new URLSearchParams(search);
@@ -64,11 +87,21 @@ export function DashboardView({ name }: { name: DashboardKind }) {
   return (
     <div className="mt-4 space-y-6">
       <h2 className="text-lg font-semibold">{d.practice.label}</h2>
-      {d.notes.map((n) => <p key={n} className="text-ink-2">{n}</p>)}
-      {nothing && <EmptyState title="Nothing matches these filters">Widen the years or venues, or choose another practice.</EmptyState>}
+      {d.notes.map((n) => (
+        <p key={n} className="text-ink-2">
+          {n}
+        </p>
+      ))}
+      {nothing && (
+        <EmptyState title="Nothing matches these filters">
+          Widen the years or venues, or choose another practice.
+        </EmptyState>
+      )}
       {name === "practice-over-time" && d.tables.byYear.rows.length > 0 && (
         <section aria-labelledby="c1">
-          <h3 id="c1" className="font-medium">Share of articles asserting it, by sourcing (click a year to see its trails)</h3>
+          <h3 id="c1" className="font-medium">
+            Share of articles asserting it, by sourcing (click a year to see its trails)
+          </h3>
           <SourcingByYearChart rows={d.tables.byYear.rows} onYear={openTrails} />
           <ShareLineChart rows={d.tables.byYear.rows} />
           <DataTable id="table-byYear" table={d.tables.byYear} csvHref={csv("byYear")} />
@@ -78,47 +111,91 @@ export function DashboardView({ name }: { name: DashboardKind }) {
       {name === "trail-ends" && (
         <>
           <section aria-labelledby="c2a">
-            <h3 id="c2a" className="font-medium">Where trails end, by year</h3>
-            <SimpleBarChart rows={withOtherEnds(d.tables.ends.rows)} series={END_SERIES} indexBy="year" percent axisLabel="share of statements" />
+            <h3 id="c2a" className="font-medium">
+              Where trails end, by year
+            </h3>
+            <SimpleBarChart
+              rows={withOtherEnds(d.tables.ends.rows)}
+              series={END_SERIES}
+              indexBy="year"
+              percent
+              axisLabel="share of statements"
+            />
             <DataTable id="table-ends" table={d.tables.ends} csvHref={csv("ends")} />
           </section>
           <section aria-labelledby="c2b">
-            <h3 id="c2b" className="font-medium">Trail lengths</h3>
-            <SimpleBarChart rows={d.tables.lengths.rows} series={LENGTH_SERIES} indexBy="length" axisLabel="statements" />
+            <h3 id="c2b" className="font-medium">
+              Trail lengths
+            </h3>
+            <SimpleBarChart
+              rows={d.tables.lengths.rows}
+              series={LENGTH_SERIES}
+              indexBy="length"
+              axisLabel="statements"
+            />
             <DataTable id="table-lengths" table={d.tables.lengths} csvHref={csv("lengths")} />
           </section>
           <section aria-labelledby="c2c">
-            <h3 id="c2c" className="font-medium">Most cited sources and how often a page is given</h3>
+            <h3 id="c2c" className="font-medium">
+              Most cited sources and how often a page is given
+            </h3>
             <ol className="list-decimal pl-6 text-sm">
               {d.tables.sources.rows.map((r) => (
                 <li key={String(r.work_id)}>
-                  <Link className="underline" href={`/works/${r.work_id}`}>{String(r.title ?? r.first_author ?? "Untitled work")}</Link> ({String(r.year ?? "n.d.")}, {WORK_TYPE[String(r.work_type)] ?? String(r.work_type)}): {String(r.citations)} citations, {Math.round(Number(r.locator_rate) * 100)}% with a page
+                  <Link className="underline" href={`/works/${r.work_id}`}>
+                    {String(r.title ?? r.first_author ?? "Untitled work")}
+                  </Link>{" "}
+                  ({String(r.year ?? "n.d.")}, {WORK_TYPE[String(r.work_type)] ?? String(r.work_type)}):{" "}
+                  {String(r.citations)} citations, {Math.round(Number(r.locator_rate) * 100)}% with a page
                 </li>
               ))}
             </ol>
             <DataTable id="table-sources" table={d.tables.sources} csvHref={csv("sources")} />
           </section>
-          <button type="button" className="rounded bg-ink px-3 py-1.5 text-paper" onClick={() => openTrails()}>Open the trail graph</button>
+          <button type="button" className="rounded bg-ink px-3 py-1.5 text-paper" onClick={() => openTrails()}>
+            Open the trail graph
+          </button>
         </>
       )}
       {name === "venues" && (
         <section aria-labelledby="c4">
-          <h3 id="c4" className="font-medium">Venue rates and in-venue precedent (95% Wilson intervals in the table)</h3>
-          <p className="text-sm text-ink-2">In-venue precedent: the share of a venue's citations for this practice that go to its own earlier articles (same venue, not published in a later year).</p>
-          <SimpleBarChart rows={d.tables.venues.rows} series={VENUE_SERIES} indexBy="venue" percent mode="grouped" horizontal />
+          <h3 id="c4" className="font-medium">
+            Venue rates and in-venue precedent (95% Wilson intervals in the table)
+          </h3>
+          <p className="text-sm text-ink-2">
+            In-venue precedent: the share of a venue's citations for this practice that go to its own earlier articles
+            (same venue, not published in a later year).
+          </p>
+          <SimpleBarChart
+            rows={d.tables.venues.rows}
+            series={VENUE_SERIES}
+            indexBy="venue"
+            percent
+            mode="grouped"
+            horizontal
+          />
           <DataTable id="table-venues" table={d.tables.venues} csvHref={csv("venues")} />
         </section>
       )}
       {name === "drift" && (
         <section aria-labelledby="c5">
-          <h3 id="c5" className="font-medium">Claims that differ from their checked source</h3>
+          <h3 id="c5" className="font-medium">
+            Claims that differ from their checked source
+          </h3>
           <ul className="space-y-3">
             {d.tables.drift.rows.map((r) => (
               <li key={`${r.statement_id}-${r.work_id}`} className="rounded border border-rule p-3">
                 <p className="evidence">{String(r.sentence)}</p>
                 <p className="text-sm text-ink-2">
-                  Claims {String(r.claimed_value)}; <Link className="underline" href={`/works/${r.work_id}`}>{String(r.work_title ?? "the source")}</Link> {r.verdict === "says_otherwise" ? "says otherwise" : "states"} {r.stated_value === null ? "" : String(r.stated_value)} (p. {String(r.page)}).{" "}
-                  <Link className="underline" href={`/articles/${r.article_id}#statement-${r.statement_id}`}>Read the sentence in its article</Link>
+                  Claims {String(r.claimed_value)};{" "}
+                  <Link className="underline" href={`/works/${r.work_id}`}>
+                    {String(r.work_title ?? "the source")}
+                  </Link>{" "}
+                  {r.verdict === "says_otherwise" ? "says otherwise" : "states"}{" "}
+                  {r.stated_value === null ? "" : String(r.stated_value)} (p. {String(r.page)}).{" "}
+                  <Link className="underline" href={`/articles/${r.article_id}#statement-${r.statement_id}`}>
+                    Read the sentence in its article
+                  </Link>
                 </p>
               </li>
             ))}
@@ -128,7 +205,9 @@ export function DashboardView({ name }: { name: DashboardKind }) {
       )}
       {name === "trail-graph" && d.graph && (
         <section aria-labelledby="c3">
-          <h3 id="c3" className="font-medium">Trails of this practice, ordered in time (left: older; drag to pan, use the − button to see more)</h3>
+          <h3 id="c3" className="font-medium">
+            Trails of this practice, ordered in time (left: older; drag to pan, use the − button to see more)
+          </h3>
           <TrailGraph data={d.graph as TrailGraphData} />
           <DataTable id="table-edges" table={d.tables.edges} csvHref={csv("edges")} />
         </section>

@@ -15,12 +15,21 @@ export function StatementTrail({ statementId, practiceId }: { statementId: strin
     },
   });
   if (q.isPending) return <p role="status">Following the citations…</p>;
-  if (q.isError) return <p role="alert" className="text-accent">{q.error.message}</p>;
+  if (q.isError)
+    return (
+      <p role="alert" className="text-accent">
+        {q.error.message}
+      </p>
+    );
   return (
     <div className="space-y-3">
       {q.data.practice && <p className="font-medium">{q.data.practice.label}</p>}
       <TrailGraph data={q.data} />
-      <DataTable id="table-trail" table={{ title: "Citations along this trail", columns: q.data.columns, rows: q.data.rows }} csvHref={`data:text/csv;charset=utf-8,${encodeURIComponent([q.data.columns.join(","), ...q.data.rows.map((r) => q.data.columns.map((c) => JSON.stringify(r[c] ?? "")).join(","))].join("\n"))}`} />
+      <DataTable
+        id="table-trail"
+        table={{ title: "Citations along this trail", columns: q.data.columns, rows: q.data.rows }}
+        csvHref={`data:text/csv;charset=utf-8,${encodeURIComponent([q.data.columns.join(","), ...q.data.rows.map((r) => q.data.columns.map((c) => JSON.stringify(r[c] ?? "")).join(","))].join("\n"))}`}
+      />
     </div>
   );
 }

@@ -30,11 +30,21 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
       const c = col.get(n.year ?? 0) ?? 0;
       const r = rowInCol.get(c) ?? 0;
       rowInCol.set(c, r + 1);
-      const kind = n.kind === "statement" ? "claim" : n.kind === "work" ? (n.workType === "methods_source" ? "methods source" : n.workType ?? "work") : "unresolved";
+      const kind =
+        n.kind === "statement"
+          ? "claim"
+          : n.kind === "work"
+            ? n.workType === "methods_source"
+              ? "methods source"
+              : (n.workType ?? "work")
+            : "unresolved";
       return {
         id: n.id,
         position: { x: c * 240, y: r * 90 },
-        data: { label: `${n.year ?? "n.d."} · ${n.label} [${kind}]${n.end ? ` → ${END_LABEL[n.end] ?? n.end}` : ""}`, href: n.href },
+        data: {
+          label: `${n.year ?? "n.d."} · ${n.label} [${kind}]${n.end ? ` → ${END_LABEL[n.end] ?? n.end}` : ""}`,
+          href: n.href,
+        },
         style: {
           background: "var(--paper)",
           color: "var(--ink)",
@@ -62,7 +72,18 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
       <div style={{ height: 520 }} className="rounded border border-rule" aria-hidden="true">
         {/* A practice over decades is far wider than the box: fitting it all would shrink the labels
             past reading, so the first view stops at a legible zoom; drag to pan, the controls zoom out. */}
-        <ReactFlow nodes={nodes} edges={edges} fitView fitViewOptions={{ minZoom: 0.6 }} minZoom={0.1} nodesDraggable={false} onNodeClick={(_, n) => { const h = (n.data as { href?: string }).href; if (h) router.push(h); }}>
+        <ReactFlow
+          nodes={nodes}
+          edges={edges}
+          fitView
+          fitViewOptions={{ minZoom: 0.6 }}
+          minZoom={0.1}
+          nodesDraggable={false}
+          onNodeClick={(_, n) => {
+            const h = (n.data as { href?: string }).href;
+            if (h) router.push(h);
+          }}
+        >
           <Background />
           <Controls />
         </ReactFlow>
@@ -70,8 +91,22 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
       <ul className="mt-3 space-y-1 text-sm" aria-label="Trail steps">
         {data.nodes.map((n) => (
           <li key={n.id}>
-            {n.href ? <a className="underline" href={n.href}>{n.year ?? "n.d."} · {n.label}</a> : <span>{n.label}</span>}
-            {n.kind === "statement" && <> · <a className="underline" href={`/trails/${n.id.slice("statement:".length)}`}>its trail</a></>}
+            {n.href ? (
+              <a className="underline" href={n.href}>
+                {n.year ?? "n.d."} · {n.label}
+              </a>
+            ) : (
+              <span>{n.label}</span>
+            )}
+            {n.kind === "statement" && (
+              <>
+                {" "}
+                ·{" "}
+                <a className="underline" href={`/trails/${n.id.slice("statement:".length)}`}>
+                  its trail
+                </a>
+              </>
+            )}
             {n.sentence && <span className="evidence block text-ink-2">“{n.sentence}”</span>}
           </li>
         ))}

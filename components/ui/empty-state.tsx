@@ -1,7 +1,15 @@
 import Link from "next/link";
 
 /** Every empty screen says what to do next. */
-export function EmptyState({ title, children, action }: { title: string; children?: React.ReactNode; action?: { href: string; label: string } }) {
+export function EmptyState({
+  title,
+  children,
+  action,
+}: {
+  title: string;
+  children?: React.ReactNode;
+  action?: { href: string; label: string };
+}) {
   return (
     <div className="rounded-lg border border-dashed border-rule bg-paper-2 p-6 text-center" role="status">
       <h2 className="font-semibold text-lg">{title}</h2>

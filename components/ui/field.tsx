@@ -14,7 +14,9 @@ export function Field({
   const hintId = `${id}-hint`;
   return (
     <div className="grid gap-1">
-      <label htmlFor={id} className="text-sm font-medium">{label}</label>
+      <label htmlFor={id} className="text-sm font-medium">
+        {label}
+      </label>
       <input
         id={id}
         name={name}
@@ -23,8 +25,14 @@ export function Field({
         className="rounded border border-rule bg-paper px-2 py-1.5 text-ink aria-[invalid=true]:border-accent"
         {...input}
       />
-      {hint && <p id={hintId} className="text-xs text-ink-2">{hint}</p>}
-      <p id={errId} aria-live="polite" className="text-sm text-accent min-h-[1.25rem]">{error ?? ""}</p>
+      {hint && (
+        <p id={hintId} className="text-xs text-ink-2">
+          {hint}
+        </p>
+      )}
+      <p id={errId} aria-live="polite" className="text-sm text-accent min-h-[1.25rem]">
+        {error ?? ""}
+      </p>
     </div>
   );
 }

@@ -4,7 +4,10 @@ import { SOURCING } from "./sourcing";
 export function SourcingBadge({ sourcing }: { sourcing: Sourcing }) {
   const s = SOURCING[sourcing];
   return (
-    <span className="inline-flex items-center gap-1.5 rounded-full border px-2 py-0.5 text-xs font-medium" style={{ borderColor: s.color, color: s.color }}>
+    <span
+      className="inline-flex items-center gap-1.5 rounded-full border px-2 py-0.5 text-xs font-medium"
+      style={{ borderColor: s.color, color: s.color }}
+    >
       <svg width="10" height="10" aria-hidden="true">
         <rect width="10" height="10" rx="2" fill={s.pattern === "solid" ? s.color : "none"} stroke={s.color} />
         {s.pattern === "lines" && <path d="M0 10 L10 0 M-2 4 L4 -2 M6 12 L12 6" stroke={s.color} />}

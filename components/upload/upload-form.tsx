@@ -14,14 +14,21 @@ type Row = {
   duplicate?: boolean;
   error?: string;
 };
-type ServerFile = { id: string; status: ArticleStatus; failure_code: string | null; failure_message: string | null; title: string | null };
+type ServerFile = {
+  id: string;
+  status: ArticleStatus;
+  failure_code: string | null;
+  failure_message: string | null;
+  title: string | null;
+};
 
 const MAX_MB = 50;
 const PARALLEL = 2;
 
 async function json<T>(r: Response): Promise<T> {
   const body = await r.json().catch(() => ({ error: { message: `The server answered ${r.status}.` } }));
-  if (!r.ok) throw new Error((body as { error?: { message?: string } }).error?.message ?? `The server answered ${r.status}.`);
+  if (!r.ok)
+    throw new Error((body as { error?: { message?: string } }).error?.message ?? `The server answered ${r.status}.`);
   return body as T;
 }
 
@@ -54,7 +61,8 @@ export function UploadForm() {
   const status = useQuery({
     queryKey: ["upload-batch", batchId, articleIds.join(",")],
     enabled: !!batchId && articleIds.length > 0,
-    queryFn: async () => json<{ files: ServerFile[] }>(await fetch(`/api/uploads/${batchId}?ids=${articleIds.join(",")}`)),
+    queryFn: async () =>
+      json<{ files: ServerFile[] }>(await fetch(`/api/uploads/${batchId}?ids=${articleIds.join(",")}`)),
     // Live progress by polling: once a second while anything is unfinished, then it stops.
     refetchInterval: (q) => {
       const files = q.state.data?.files ?? [];
@@ -65,7 +73,8 @@ export function UploadForm() {
   });
   const byId = new Map((status.data?.files ?? []).map((f) => [f.id, f]));
 
-  const update = (key: string, patch: Partial<Row>) => setRows((rs) => rs.map((r) => (r.key === key ? { ...r, ...patch } : r)));
+  const update = (key: string, patch: Partial<Row>) =>
+    setRows((rs) => rs.map((r) => (r.key === key ? { ...r, ...patch } : r)));
 
   async function start(e: React.FormEvent) {
     e.preventDefault();
@@ -78,11 +87,21 @@ export function UploadForm() {
     setFormError(null);
     try {
       const metadata = meta ? { filename: meta.name, text: await meta.text() } : null;
-      const b = await json<{ batchId: string; metadata: { format: string; entries: number; warnings: string[] } | null }>(
-        await fetch("/api/uploads", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ metadata }) }),
+      const b = await json<{
+        batchId: string;
+        metadata: { format: string; entries: number; warnings: string[] } | null;
+      }>(
+        await fetch("/api/uploads", {
+          method: "POST",
+          headers: { "content-type": "application/json" },
+          body: JSON.stringify({ metadata }),
+        }),
       );
       setBatchId(b.batchId);
-      if (b.metadata) setMetaNote(`${b.metadata.entries} entries read from the ${b.metadata.format.toUpperCase()} file.${b.metadata.warnings.length ? " " + b.metadata.warnings.join(" ") : ""}`);
+      if (b.metadata)
+        setMetaNote(
+          `${b.metadata.entries} entries read from the ${b.metadata.format.toUpperCase()} file.${b.metadata.warnings.length ? " " + b.metadata.warnings.join(" ") : ""}`,
+        );
       const queue = [...waiting];
       const worker = async () => {
         for (let r = queue.shift(); r; r = queue.shift()) {
@@ -93,7 +112,11 @@ export function UploadForm() {
           }
           update(r.key, { phase: "sending" });
           try {
-            const res = await fetch(`/api/uploads/${b.batchId}/files?name=${encodeURIComponent(file.name)}`, { method: "POST", headers: { "content-type": "application/octet-stream" }, body: file });
+            const res = await fetch(`/api/uploads/${b.batchId}/files?name=${encodeURIComponent(file.name)}`, {
+              method: "POST",
+              headers: { "content-type": "application/octet-stream" },
+              body: file,
+            });
             const out = await json<{ articleId: string; duplicate: boolean }>(res);
             update(r.key, { phase: "sent", articleId: out.articleId, duplicate: out.duplicate });
           } catch (err) {
@@ -115,8 +138,12 @@ export function UploadForm() {
     if (r.phase === "sending") return { label: "Uploading", tone: "wait" };
     const f = r.articleId ? byId.get(r.articleId) : undefined;
     if (!f) return { label: "Uploaded", tone: "wait" };
-    if (f.status === "failed") return { label: "Failed", tone: "bad", reason: f.failure_message ?? "No reason recorded." };
-    return { label: STATUS_LABEL[f.status] + (r.duplicate ? " (duplicate: already in the corpus)" : ""), tone: f.status === "done" ? "ok" : "wait" };
+    if (f.status === "failed")
+      return { label: "Failed", tone: "bad", reason: f.failure_message ?? "No reason recorded." };
+    return {
+      label: STATUS_LABEL[f.status] + (r.duplicate ? " (duplicate: already in the corpus)" : ""),
+      tone: f.status === "done" ? "ok" : "wait",
+    };
   };
   const states = rows.map(stateOf);
   const done = states.filter((s) => s.label.startsWith("Done")).length;
@@ -140,7 +167,10 @@ export function UploadForm() {
       >
         <p className="text-lg">Drop PDF, JATS XML or plain-text files here</p>
         <p className="mt-1 text-sm text-ink-2">or</p>
-        <label htmlFor={inputId} className="mt-2 inline-block cursor-pointer rounded border border-rule px-3 py-1.5 hover:bg-paper-2">
+        <label
+          htmlFor={inputId}
+          className="mt-2 inline-block cursor-pointer rounded border border-rule px-3 py-1.5 hover:bg-paper-2"
+        >
           Choose files
         </label>
         <input
@@ -155,18 +185,32 @@ export function UploadForm() {
           }}
           aria-label="Article files"
         />
-        <p className="mt-3 text-xs text-ink-2">Up to {MAX_MB} MB per file. The type is read from the file itself, not its name. Load only articles whose licence allows text mining.</p>
+        <p className="mt-3 text-xs text-ink-2">
+          Up to {MAX_MB} MB per file. The type is read from the file itself, not its name. Load only articles whose
+          licence allows text mining.
+        </p>
       </div>
 
       <div className="grid gap-1">
         <label htmlFor={metaId} className="font-medium">
           Metadata file (optional)
         </label>
-        <input id={metaId} type="file" accept=".bib,.bibtex,.ris,.csv,text/csv" onChange={(e) => setMeta(e.target.files?.[0] ?? null)} aria-describedby={`${metaId}-hint`} />
+        <input
+          id={metaId}
+          type="file"
+          accept=".bib,.bibtex,.ris,.csv,text/csv"
+          onChange={(e) => setMeta(e.target.files?.[0] ?? null)}
+          aria-describedby={`${metaId}-hint`}
+        />
         <p id={`${metaId}-hint`} className="text-sm text-ink-2">
-          BibTeX, RIS or CSV (columns doi, title, authors, year, venue, licence, file). Entries are matched to the files by DOI or file name.
+          BibTeX, RIS or CSV (columns doi, title, authors, year, venue, licence, file). Entries are matched to the files
+          by DOI or file name.
         </p>
-        {metaNote && <p className="text-sm" role="status">{metaNote}</p>}
+        {metaNote && (
+          <p className="text-sm" role="status">
+            {metaNote}
+          </p>
+        )}
       </div>
 
       <div aria-live="polite">
@@ -206,11 +250,22 @@ export function UploadForm() {
               return (
                 <tr key={r.key} className="border-b border-rule align-top" data-testid="upload-row">
                   <td className="py-1.5 pr-3">
-                    {r.articleId && s.label.startsWith("Done") ? <Link className="underline" href={`/articles/${r.articleId}`}>{r.name}</Link> : r.name}
+                    {r.articleId && s.label.startsWith("Done") ? (
+                      <Link className="underline" href={`/articles/${r.articleId}`}>
+                        {r.name}
+                      </Link>
+                    ) : (
+                      r.name
+                    )}
                   </td>
                   <td className="py-1.5 pr-3 tabular-nums">{(r.size / 1024).toFixed(0)} KB</td>
                   <td className="py-1.5" aria-live="polite">
-                    <span className={s.tone === "bad" ? "font-medium text-accent" : s.tone === "ok" ? "font-medium" : "text-ink-2"} data-testid="upload-status">
+                    <span
+                      className={
+                        s.tone === "bad" ? "font-medium text-accent" : s.tone === "ok" ? "font-medium" : "text-ink-2"
+                      }
+                      data-testid="upload-status"
+                    >
                       {s.label}
                     </span>
                     {s.reason && <span className="block text-ink-2">{s.reason}</span>}

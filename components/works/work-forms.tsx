@@ -6,7 +6,11 @@ import { sourceCheckSchema } from "@/lib/graph/practice-form";
 type Practice = { id: string; label: string };
 type FieldErrors = Partial<Record<string, string>>;
 
-async function post(url: string, method: string, body: unknown): Promise<{ ok: true } | { ok: false; field?: string; message: string }> {
+async function post(
+  url: string,
+  method: string,
+  body: unknown,
+): Promise<{ ok: true } | { ok: false; field?: string; message: string }> {
   const r = await fetch(url, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
   if (r.ok) return { ok: true };
   const e = await r.json().catch(() => null);
@@ -25,7 +29,14 @@ export function SourceCheckForm({ workId, practices }: { workId: string; practic
       onSubmit={async (e) => {
         e.preventDefault();
         const fd = Object.fromEntries(new FormData(e.currentTarget));
-        const input = { workId, practiceId: fd.practiceId, verdict: fd.verdict, page: fd.page || null, quote: fd.quote || null, statedValue: fd.statedValue === "" ? null : fd.statedValue };
+        const input = {
+          workId,
+          practiceId: fd.practiceId,
+          verdict: fd.verdict,
+          page: fd.page || null,
+          quote: fd.quote || null,
+          statedValue: fd.statedValue === "" ? null : fd.statedValue,
+        };
         const parsed = sourceCheckSchema.safeParse(input);
         if (!parsed.success) {
           setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])));
@@ -41,18 +52,60 @@ export function SourceCheckForm({ workId, practices }: { workId: string; practic
       }}
     >
       <h3 className="font-medium">Record what this work says</h3>
-      <label className="block">Practice <select name="practiceId" className="ml-2 rounded border border-rule bg-paper" aria-describedby="err-practiceId">{practices.map((p) => <option key={p.id} value={p.id}>{p.label}</option>)}</select></label>
+      <label className="block">
+        Practice{" "}
+        <select
+          name="practiceId"
+          className="ml-2 rounded border border-rule bg-paper"
+          aria-describedby="err-practiceId"
+        >
+          {practices.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.label}
+            </option>
+          ))}
+        </select>
+      </label>
       <fieldset>
         <legend>It…</legend>
-        {[["says_so", "says so"], ["says_otherwise", "says otherwise"], ["silent", "is silent"], ["not_checked", "not checked yet"]].map(([v, l]) => (
-          <label key={v} className="mr-3"><input type="radio" name="verdict" value={v} defaultChecked={v === "says_so"} /> {l}</label>
+        {[
+          ["says_so", "says so"],
+          ["says_otherwise", "says otherwise"],
+          ["silent", "is silent"],
+          ["not_checked", "not checked yet"],
+        ].map(([v, l]) => (
+          <label key={v} className="mr-3">
+            <input type="radio" name="verdict" value={v} defaultChecked={v === "says_so"} /> {l}
+          </label>
         ))}
       </fieldset>
-      <label className="block">Page <input name="page" className="ml-2 w-24 rounded border border-rule bg-paper" aria-describedby="err-page" /></label>
-      <label className="block">Stated value <input name="statedValue" inputMode="decimal" className="ml-2 w-24 rounded border border-rule bg-paper" aria-describedby="err-statedValue" /></label>
-      <label className="block">Short quote <textarea name="quote" maxLength={600} className="block w-full rounded border border-rule bg-paper" aria-describedby="err-quote" /></label>
+      <label className="block">
+        Page <input name="page" className="ml-2 w-24 rounded border border-rule bg-paper" aria-describedby="err-page" />
+      </label>
+      <label className="block">
+        Stated value{" "}
+        <input
+          name="statedValue"
+          inputMode="decimal"
+          className="ml-2 w-24 rounded border border-rule bg-paper"
+          aria-describedby="err-statedValue"
+        />
+      </label>
+      <label className="block">
+        Short quote{" "}
+        <textarea
+          name="quote"
+          maxLength={600}
+          className="block w-full rounded border border-rule bg-paper"
+          aria-describedby="err-quote"
+        />
+      </label>
       <div aria-live="polite" className="text-sm">
-        {Object.entries(errors).map(([k, m]) => <p key={k} id={`err-${k}`} className="text-accent">{m}</p>)}
+        {Object.entries(errors).map(([k, m]) => (
+          <p key={k} id={`err-${k}`} className="text-accent">
+            {m}
+          </p>
+        ))}
         {status && <p>{status}</p>}
       </div>
       <button className="rounded bg-ink px-3 py-1.5 text-paper">Save source check</button>
@@ -75,7 +128,14 @@ export function CurateWork({ workId, references }: { workId: string; references:
           router.refresh();
         }}
       >
-        <label>Type <select name="workType" className="rounded border border-rule bg-paper"><option value="methods_source">methods source</option><option value="empirical">empirical</option><option value="unknown">unknown</option></select></label>{" "}
+        <label>
+          Type{" "}
+          <select name="workType" className="rounded border border-rule bg-paper">
+            <option value="methods_source">methods source</option>
+            <option value="empirical">empirical</option>
+            <option value="unknown">unknown</option>
+          </select>
+        </label>{" "}
         <button className="rounded border border-ink px-2 py-0.5">Set type</button>
       </form>
       <form
@@ -87,7 +147,10 @@ export function CurateWork({ workId, references }: { workId: string; references:
           else setMsg(r.message);
         }}
       >
-        <label>Merge into work id <input name="intoId" className="w-80 rounded border border-rule bg-paper" /></label> <button className="rounded border border-ink px-2 py-0.5">Merge</button>
+        <label>
+          Merge into work id <input name="intoId" className="w-80 rounded border border-rule bg-paper" />
+        </label>{" "}
+        <button className="rounded border border-ink px-2 py-0.5">Merge</button>
       </form>
       <form
         onSubmit={async (e) => {
@@ -100,11 +163,17 @@ export function CurateWork({ workId, references }: { workId: string; references:
       >
         <fieldset>
           <legend>Split wrongly matched references off</legend>
-          {references.map((r) => <label key={r.id} className="block text-sm"><input type="checkbox" name="ref" value={r.id} /> {r.raw}</label>)}
+          {references.map((r) => (
+            <label key={r.id} className="block text-sm">
+              <input type="checkbox" name="ref" value={r.id} /> {r.raw}
+            </label>
+          ))}
         </fieldset>
         <button className="rounded border border-ink px-2 py-0.5">Split</button>
       </form>
-      <p aria-live="polite" className="text-sm">{msg}</p>
+      <p aria-live="polite" className="text-sm">
+        {msg}
+      </p>
     </div>
   );
 }

@@ -25,18 +25,52 @@ export async function listUsers(db: DB) {
 }
 
 /** Creates the person (unique by e-mail: 23505 when they exist) and a 7-day invitation token. */
-export async function createInvitation(db: DB, input: { email: string; role: Role; venueIds: string[]; invitedBy: string | null }) {
+export async function createInvitation(
+  db: DB,
+  input: { email: string; role: Role; venueIds: string[]; invitedBy: string | null },
+) {
   const token = randomBytes(24).toString("base64url");
   return db.transaction().execute(async (trx) => {
-    const user = await trx.insertInto("User").values({ email: input.email, role: input.role, name: null, emailVerified: null, image: null, password_hash: null, deactivated_at: null }).returning(["id"]).executeTakeFirstOrThrow();
+    const user = await trx
+      .insertInto("User")
+      .values({
+        email: input.email,
+        role: input.role,
+        name: null,
+        emailVerified: null,
+        image: null,
+        password_hash: null,
+        deactivated_at: null,
+      })
+      .returning(["id"])
+      .executeTakeFirstOrThrow();
     if (input.venueIds.length) {
-      await trx.insertInto("editor_venues").values(input.venueIds.map((v) => ({ user_id: user.id, venue_id: v }))).execute();
+      await trx
+        .insertInto("editor_venues")
+        .values(input.venueIds.map((v) => ({ user_id: user.id, venue_id: v })))
+        .execute();
     }
     await trx
       .insertInto("invitations")
-      .values({ email: input.email, role: input.role, token_hash: sha256(token), invited_by: input.invitedBy, user_id: user.id, expires_at: sql<Date>`now() + interval '7 days'` as never, accepted_at: null })
+      .values({
+        email: input.email,
+        role: input.role,
+        token_hash: sha256(token),
+        invited_by: input.invitedBy,
+        user_id: user.id,
+        expires_at: sql<Date>`now() + interval '7 days'` as never,
+        accepted_at: null,
+      })
       .execute();
-    await trx.insertInto("audit_log").values({ actor_id: input.invitedBy, action: "invite", target: user.id, detail: JSON.stringify({ email: input.email, role: input.role }) }).execute();
+    await trx
+      .insertInto("audit_log")
+      .values({
+        actor_id: input.invitedBy,
+        action: "invite",
+        target: user.id,
+        detail: JSON.stringify({ email: input.email, role: input.role }),
+      })
+      .execute();
     return { userId: user.id, token };
   });
 }
@@ -49,7 +83,10 @@ export async function findInvitation(db: DB, token: string) {
     .executeTakeFirst();
 }
 
-export async function acceptInvitation(db: DB, input: { token: string; name: string; passwordHash: string }): Promise<"ok" | "expired" | "used" | "invalid"> {
+export async function acceptInvitation(
+  db: DB,
+  input: { token: string; name: string; passwordHash: string },
+): Promise<"ok" | "expired" | "used" | "invalid"> {
   return db.transaction().execute(async (trx) => {
     const inv = await trx
       .selectFrom("invitations")
@@ -61,12 +98,21 @@ export async function acceptInvitation(db: DB, input: { token: string; name: str
     if (inv.accepted_at) return "used";
     if (new Date(inv.expires_at) < new Date()) return "expired";
     await trx.updateTable("invitations").set({ accepted_at: new Date() }).where("id", "=", inv.id).execute();
-    await trx.updateTable("User").set({ name: input.name, password_hash: input.passwordHash, emailVerified: new Date() }).where("id", "=", inv.user_id).execute();
+    await trx
+      .updateTable("User")
+      .set({ name: input.name, password_hash: input.passwordHash, emailVerified: new Date() })
+      .where("id", "=", inv.user_id)
+      .execute();
     return "ok";
   });
 }
 
-export async function updateUser(db: DB, actorId: string, id: string, patch: { role?: Role; active?: boolean; venueIds?: string[] }) {
+export async function updateUser(
+  db: DB,
+  actorId: string,
+  id: string,
+  patch: { role?: Role; active?: boolean; venueIds?: string[] },
+) {
   return db.transaction().execute(async (trx) => {
     const set: { role?: Role; deactivated_at?: Date | null } = {};
     if (patch.role) set.role = patch.role;
@@ -77,19 +123,35 @@ export async function updateUser(db: DB, actorId: string, id: string, patch: { r
     } else if (!(await trx.selectFrom("User").select("id").where("id", "=", id).executeTakeFirst())) return false;
     if (patch.venueIds) {
       await trx.deleteFrom("editor_venues").where("user_id", "=", id).execute();
-      if (patch.venueIds.length) await trx.insertInto("editor_venues").values(patch.venueIds.map((v) => ({ user_id: id, venue_id: v }))).execute();
+      if (patch.venueIds.length)
+        await trx
+          .insertInto("editor_venues")
+          .values(patch.venueIds.map((v) => ({ user_id: id, venue_id: v })))
+          .execute();
     }
-    await trx.insertInto("audit_log").values({ actor_id: actorId, action: "update_user", target: id, detail: JSON.stringify(patch) }).execute();
+    await trx
+      .insertInto("audit_log")
+      .values({ actor_id: actorId, action: "update_user", target: id, detail: JSON.stringify(patch) })
+      .execute();
     return true;
   });
 }
 
 /** How many active admins there would be; an admin may not remove the last one. */
 export async function activeAdminCount(db: DB) {
-  const r = await db.selectFrom("User").select((eb) => eb.fn.countAll<number>().as("n")).where("role", "=", "admin").where("deactivated_at", "is", null).executeTakeFirstOrThrow();
+  const r = await db
+    .selectFrom("User")
+    .select((eb) => eb.fn.countAll<number>().as("n"))
+    .where("role", "=", "admin")
+    .where("deactivated_at", "is", null)
+    .executeTakeFirstOrThrow();
   return Number(r.n);
 }
 
 export async function listVenues(db: DB) {
-  return db.selectFrom("venues").select(["id", "name", "abbreviation", "issn", "is_methods_venue", "is_demo"]).orderBy("name").execute();
+  return db
+    .selectFrom("venues")
+    .select(["id", "name", "abbreviation", "issn", "is_methods_venue", "is_demo"])
+    .orderBy("name")
+    .execute();
 }

@@ -17,8 +17,16 @@ export type Permission =
   | "admin:mail"; // read the local mail fake's captured messages
 
 const ALL: Permission[] = [
-  "corpus:read", "corpus:upload", "corpus:curate", "practices:manage", "screening:run",
-  "benchmark:view", "casebook:manage", "admin:users", "admin:venues", "admin:mail",
+  "corpus:read",
+  "corpus:upload",
+  "corpus:curate",
+  "practices:manage",
+  "screening:run",
+  "benchmark:view",
+  "casebook:manage",
+  "admin:users",
+  "admin:venues",
+  "admin:mail",
 ];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {

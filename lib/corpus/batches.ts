@@ -4,20 +4,37 @@ import type { Database, DB } from "@/db";
 import { matchEntry, type MetadataEntry } from "@/lib/metadata";
 import type { IngestMetadata } from "./ingest";
 
-export async function createBatch(db: DB, input: { createdBy: string | null; metadataFilename?: string | null; entries?: MetadataEntry[] }): Promise<string> {
-  const withEntries = input.entries?.length ? { metadata_filename: input.metadataFilename ?? null, metadata_entries: JSON.stringify(input.entries) } : {};
-  const row = await db.insertInto("upload_batches").values({ created_by: input.createdBy, ...withEntries }).returning("id").executeTakeFirstOrThrow();
+export async function createBatch(
+  db: DB,
+  input: { createdBy: string | null; metadataFilename?: string | null; entries?: MetadataEntry[] },
+): Promise<string> {
+  const withEntries = input.entries?.length
+    ? { metadata_filename: input.metadataFilename ?? null, metadata_entries: JSON.stringify(input.entries) }
+    : {};
+  const row = await db
+    .insertInto("upload_batches")
+    .values({ created_by: input.createdBy, ...withEntries })
+    .returning("id")
+    .executeTakeFirstOrThrow();
   return row.id;
 }
 
 async function entriesOf(db: DB | Transaction<Database>, batchId: string): Promise<MetadataEntry[]> {
-  const r = await db.selectFrom("upload_batches").select("metadata_entries").where("id", "=", batchId).executeTakeFirst();
+  const r = await db
+    .selectFrom("upload_batches")
+    .select("metadata_entries")
+    .where("id", "=", batchId)
+    .executeTakeFirst();
   return r?.metadata_entries ?? [];
 }
 
 export async function venueIdByName(db: DB | Transaction<Database>, name: string | null): Promise<string | undefined> {
   if (!name) return undefined;
-  const v = await db.selectFrom("venues").select("id").where((eb) => eb(eb.fn("lower", ["name"]), "=", name.trim().toLowerCase())).executeTakeFirst();
+  const v = await db
+    .selectFrom("venues")
+    .select("id")
+    .where((eb) => eb(eb.fn("lower", ["name"]), "=", name.trim().toLowerCase()))
+    .executeTakeFirst();
   return v?.id;
 }
 
@@ -33,7 +50,11 @@ async function toIngest(db: DB | Transaction<Database>, e: MetadataEntry): Promi
 }
 
 /** The batch's metadata entry for a file, by file name (the DOI is not known before mining). */
-export async function metadataForFile(db: DB, batchId: string, filename: string): Promise<{ metadata: IngestMetadata; matched: boolean }> {
+export async function metadataForFile(
+  db: DB,
+  batchId: string,
+  filename: string,
+): Promise<{ metadata: IngestMetadata; matched: boolean }> {
   const e = matchEntry(await entriesOf(db, batchId), { filename });
   return e ? { metadata: await toIngest(db, e), matched: true } : { metadata: {}, matched: false };
 }
@@ -42,9 +63,17 @@ export async function metadataForFile(db: DB, batchId: string, filename: string)
  * After mining: the document's DOI may match an entry of its batch's metadata file. Fills the
  * fields that are still empty, before the document's own metadata is considered.
  */
-export async function applyBatchMetadataByDoi(trx: Transaction<Database>, articleId: string, doi: string | null): Promise<void> {
+export async function applyBatchMetadataByDoi(
+  trx: Transaction<Database>,
+  articleId: string,
+  doi: string | null,
+): Promise<void> {
   if (!doi) return;
-  const a = await trx.selectFrom("articles").select(["upload_batch_id", "title", "authors", "year", "doi", "venue_id", "licence"]).where("id", "=", articleId).executeTakeFirst();
+  const a = await trx
+    .selectFrom("articles")
+    .select(["upload_batch_id", "title", "authors", "year", "doi", "venue_id", "licence"])
+    .where("id", "=", articleId)
+    .executeTakeFirst();
   if (!a?.upload_batch_id) return;
   const e = matchEntry(await entriesOf(trx, a.upload_batch_id), { filename: "\u0000", doi });
   if (!e) return;

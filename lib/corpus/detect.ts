@@ -42,10 +42,13 @@ export async function detectKind(data: Uint8Array): Promise<Detected> {
     return { kind: null, reason: `The file's content is ${ft.mime} (.${ft.ext}), not a PDF, JATS XML or plain text.` };
   }
   const text = decodeUtf8(data);
-  if (text === null) return { kind: null, reason: "The file is neither a PDF nor UTF-8 text (binary content of an unknown type)." };
+  if (text === null)
+    return { kind: null, reason: "The file is neither a PDF nor UTF-8 text (binary content of an unknown type)." };
   const start = text.replace(/^\uFEFF/, "").trimStart();
-  if (ft?.ext === "xml" || start.startsWith("<?xml") || /^<(!DOCTYPE\s+)?[A-Za-z]/.test(start)) return { kind: "jats", mediaType: MEDIA.jats };
+  if (ft?.ext === "xml" || start.startsWith("<?xml") || /^<(!DOCTYPE\s+)?[A-Za-z]/.test(start))
+    return { kind: "jats", mediaType: MEDIA.jats };
   // Control bytes other than tab, newline, carriage return and form feed mean this is not text.
-  if (/[\u0000-\u0008\u000B\u000E-\u001F]/.test(text)) return { kind: null, reason: "The file contains binary control bytes, so it is not plain text." };
+  if (/[\u0000-\u0008\u000B\u000E-\u001F]/.test(text))
+    return { kind: null, reason: "The file contains binary control bytes, so it is not plain text." };
   return { kind: "text", mediaType: MEDIA.text };
 }

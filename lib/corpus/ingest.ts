@@ -45,10 +45,18 @@ export function sha256Hex(data: Uint8Array): string {
   return createHash("sha256").update(data).digest("hex");
 }
 
-export async function ingestFile(db: DB, storage: FileStorage, input: IngestInput): Promise<{ articleId: string; duplicate: boolean }> {
+export async function ingestFile(
+  db: DB,
+  storage: FileStorage,
+  input: IngestInput,
+): Promise<{ articleId: string; duplicate: boolean }> {
   if (input.data.length === 0) throw new IngestError("empty", `${input.filename} is empty (0 bytes).`);
   const detected = await detectKind(input.data);
-  if (detected.kind === null) throw new IngestError("unsupported_type", `${input.filename}: ${detected.reason} Upload a PDF, JATS XML or plain-text file.`);
+  if (detected.kind === null)
+    throw new IngestError(
+      "unsupported_type",
+      `${input.filename}: ${detected.reason} Upload a PDF, JATS XML or plain-text file.`,
+    );
   const sha = sha256Hex(input.data);
   // The file is written before the rows: a rolled-back transaction leaves at most an unreferenced
   // file, which is harmless because storage is content-addressed and a retry reuses it.
@@ -82,7 +90,11 @@ export async function ingestFile(db: DB, storage: FileStorage, input: IngestInpu
         .returning("id")
         .executeTakeFirst();
       if (!inserted) {
-        const existing = await trx.selectFrom("articles").select("id").where("file_sha256", "=", sha).executeTakeFirstOrThrow();
+        const existing = await trx
+          .selectFrom("articles")
+          .select("id")
+          .where("file_sha256", "=", sha)
+          .executeTakeFirstOrThrow();
         return { articleId: existing.id, duplicate: true };
       }
       await recordEvent(trx, inserted.id, "uploaded", null);
@@ -97,15 +109,26 @@ export async function ingestFile(db: DB, storage: FileStorage, input: IngestInpu
       return { articleId: inserted.id, duplicate: false };
     });
   } catch (err) {
-    if ((err as { code?: string; constraint?: string }).code === "23505" && (err as { constraint?: string }).constraint === "articles_doi_lower") {
-      throw new IngestError("doi_taken", `${input.filename}: another article of the corpus already has the DOI ${normaliseDoi(m.doi)}.`);
+    if (
+      (err as { code?: string; constraint?: string }).code === "23505" &&
+      (err as { constraint?: string }).constraint === "articles_doi_lower"
+    ) {
+      throw new IngestError(
+        "doi_taken",
+        `${input.filename}: another article of the corpus already has the DOI ${normaliseDoi(m.doi)}.`,
+      );
     }
     throw err;
   }
 }
 
 /** Marks an article queued and sends its mining job, inside the caller's transaction. */
-export async function queueArticle(trx: Transaction<Database>, boss: Awaited<ReturnType<typeof senderFor>>, articleId: string, reason: "upload" | "remine"): Promise<boolean> {
+export async function queueArticle(
+  trx: Transaction<Database>,
+  boss: Awaited<ReturnType<typeof senderFor>>,
+  articleId: string,
+  reason: "upload" | "remine",
+): Promise<boolean> {
   const jobId = await enqueueMining(boss, trx, { articleId, reason });
   if (!jobId) return false;
   await trx

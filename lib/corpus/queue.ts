@@ -32,7 +32,10 @@ type Executor = Kysely<Database> | Transaction<Database>;
 export function bossDb(db: Executor) {
   const rows = (r: { rows: unknown[] }) => ({ rows: r.rows as Record<string, unknown>[] });
   if (db.isTransaction) {
-    return { executeSql: async (text: string, values?: unknown[]) => rows(await db.executeQuery(CompiledQuery.raw(text, values ?? []))) };
+    return {
+      executeSql: async (text: string, values?: unknown[]) =>
+        rows(await db.executeQuery(CompiledQuery.raw(text, values ?? []))),
+    };
   }
   return {
     executeSql: (text: string, values?: unknown[]) =>
@@ -92,7 +95,11 @@ export function senderFor(db: DB): Promise<PgBoss> {
   return p;
 }
 
-async function createIfMissing(boss: PgBoss, name: string, options: Parameters<PgBoss["createQueue"]>[1]): Promise<Queue | null> {
+async function createIfMissing(
+  boss: PgBoss,
+  name: string,
+  options: Parameters<PgBoss["createQueue"]>[1],
+): Promise<Queue | null> {
   const existing = await boss.getQueue(name);
   if (existing) return existing;
   try {
@@ -109,7 +116,10 @@ async function createIfMissing(boss: PgBoss, name: string, options: Parameters<P
  * processes), an existing mining queue is brought to `preset`: queues created before the dead-letter
  * queue and the heartbeat existed get them, and a changed preset takes effect.
  */
-export async function ensureMiningQueue(boss: PgBoss, opts: { preset?: RetryPreset; reconcile?: boolean } = {}): Promise<void> {
+export async function ensureMiningQueue(
+  boss: PgBoss,
+  opts: { preset?: RetryPreset; reconcile?: boolean } = {},
+): Promise<void> {
   const wanted = miningQueueOptions(opts.preset);
   // The dead-letter queue first: a queue may only name one that exists.
   await createIfMissing(boss, MINING_STOPPED_QUEUE, stoppedQueueOptions);
@@ -130,6 +140,10 @@ export async function ensureMiningQueue(boss: PgBoss, opts: { preset?: RetryPres
  * a second re-mine request while one waits returns null instead of queueing twice. Retry, expiry,
  * heartbeat and dead letter come from the queue (ensureMiningQueue).
  */
-export async function enqueueMining(boss: PgBoss, trx: Transaction<Database>, data: MiningJobData): Promise<string | null> {
+export async function enqueueMining(
+  boss: PgBoss,
+  trx: Transaction<Database>,
+  data: MiningJobData,
+): Promise<string | null> {
   return boss.send(MINING_QUEUE, data, { singletonKey: data.articleId, db: bossDb(trx) });
 }

@@ -43,7 +43,10 @@ export function fingerprints(statements: readonly Pick<Statement, "sentence" | "
   });
 }
 
-const surname = (authors: string) => normaliseSentence(authors).split(/[\s,&]+/).find((w) => w.length > 1 && w !== "et" && w !== "al.") ?? "";
+const surname = (authors: string) =>
+  normaliseSentence(authors)
+    .split(/[\s,&]+/)
+    .find((w) => w.length > 1 && w !== "et" && w !== "al.") ?? "";
 
 function sameCitation(a: StatementCitation, b: DocumentCitation): boolean {
   return a.authors === b.authors && a.year === b.year && a.locator === b.locator && a.secondary === b.secondary;
@@ -52,7 +55,11 @@ function sameCitation(a: StatementCitation, b: DocumentCitation): boolean {
 export type StoreCounts = { statements: number; citations: number; references: number };
 
 /** Replaces every mined row of `articleId` with the rows of `line`. Call inside a transaction. */
-export async function replaceMinedRows(trx: Transaction<Database>, articleId: string, line: SuccessLine): Promise<StoreCounts> {
+export async function replaceMinedRows(
+  trx: Transaction<Database>,
+  articleId: string,
+  line: SuccessLine,
+): Promise<StoreCounts> {
   // statement_citations go with their statements (on delete cascade).
   await trx.deleteFrom("statements").where("article_id", "=", articleId).execute();
   await trx.deleteFrom("citations").where("article_id", "=", articleId).execute();
@@ -101,7 +108,9 @@ export async function replaceMinedRows(trx: Transaction<Database>, articleId: st
     }
     const name = surname(c.authors);
     if (!name) return null;
-    const i = line.references.findIndex((r) => r.year === c.year && r.authors.length > 0 && normaliseSentence(r.authors[0]).includes(name));
+    const i = line.references.findIndex(
+      (r) => r.year === c.year && r.authors.length > 0 && normaliseSentence(r.authors[0]).includes(name),
+    );
     return i >= 0 ? refIds[i] : null;
   };
 
@@ -177,7 +186,11 @@ export async function replaceMinedRows(trx: Transaction<Database>, articleId: st
   if (links.length) {
     const pairs = links.map((l) => ({ statement_id: statementIds[l.statement], citation_id: citationIds[l.citation] }));
     for (let off = 0; off < pairs.length; off += 2000) {
-      await trx.insertInto("statement_citations").values(pairs.slice(off, off + 2000)).onConflict((oc) => oc.doNothing()).execute();
+      await trx
+        .insertInto("statement_citations")
+        .values(pairs.slice(off, off + 2000))
+        .onConflict((oc) => oc.doNothing())
+        .execute();
     }
   }
   return { statements: line.statements.length, citations: docCitations.length, references: line.references.length };

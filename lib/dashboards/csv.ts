@@ -8,5 +8,8 @@ export type Row = Record<string, Cell>;
  * download is exactly the data behind the chart. Numbers are written in full precision.
  */
 export function toCsv(columns: readonly string[], rows: readonly Row[]): string {
-  return Papa.unparse({ fields: [...columns], data: rows.map((r) => columns.map((c) => r[c] ?? "")) }, { newline: "\n" });
+  return Papa.unparse(
+    { fields: [...columns], data: rows.map((r) => columns.map((c) => r[c] ?? "")) },
+    { newline: "\n" },
+  );
 }

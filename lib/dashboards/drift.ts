@@ -32,14 +32,37 @@ export function driftSql(f: Filters) {
  * claim's value, or whose check says the source says otherwise. Values are compared with the
  * same half-unit tolerance lib/practices uses for matching (0.005).
  */
-export async function driftView(db: DB, f: Filters): Promise<{ practice: PracticeRef | null; tables: { drift: Table }; notes: string[] }> {
+export async function driftView(
+  db: DB,
+  f: Filters,
+): Promise<{ practice: PracticeRef | null; tables: { drift: Table }; notes: string[] }> {
   const { practice, rows } = (await driftSql(f).execute(db)).rows[0];
   const table: Table = {
     title: "Claims whose value differs from what their checked source says",
-    columns: ["statement_id", "article_id", "article_title", "year", "sentence", "claimed_value", "work_id", "work_title", "verdict", "stated_value", "page", "quote", "locator"],
+    columns: [
+      "statement_id",
+      "article_id",
+      "article_title",
+      "year",
+      "sentence",
+      "claimed_value",
+      "work_id",
+      "work_title",
+      "verdict",
+      "stated_value",
+      "page",
+      "quote",
+      "locator",
+    ],
     rows: [],
   };
   if (!practice) return { practice: null, tables: { drift: table }, notes: [] };
   table.rows = rows;
-  return { practice, tables: { drift: table }, notes: ["A difference is a prompt to read both texts, not a finding: the source may give several values for different purposes."] };
+  return {
+    practice,
+    tables: { drift: table },
+    notes: [
+      "A difference is a prompt to read both texts, not a finding: the source may give several values for different purposes.",
+    ],
+  };
 }

@@ -5,7 +5,12 @@ import { STATISTIC_KEYS } from "@/lib/practices";
 
 const uuidList = z
   .string()
-  .transform((s) => s.split(",").map((x) => x.trim()).filter(Boolean))
+  .transform((s) =>
+    s
+      .split(",")
+      .map((x) => x.trim())
+      .filter(Boolean),
+  )
   .pipe(z.array(z.uuid({ message: "venues must be a comma-separated list of venue ids" })).max(200));
 const year = z.coerce.number().int().min(1800).max(2100);
 
@@ -34,7 +39,11 @@ export interface PracticeRef {
  */
 export async function pickPractice(db: DB, f: Filters): Promise<PracticeRef | null> {
   if (f.practice) {
-    const p = await db.selectFrom("practices").select(["id", "key", "label", "statistic"]).where("id", "=", f.practice).executeTakeFirst();
+    const p = await db
+      .selectFrom("practices")
+      .select(["id", "key", "label", "statistic"])
+      .where("id", "=", f.practice)
+      .executeTakeFirst();
     if (p && (!f.statistic || p.statistic === f.statistic)) return p;
   }
   let q = db.selectFrom("practices").select(["id", "key", "label", "statistic"]);
@@ -48,7 +57,9 @@ export async function pickPractice(db: DB, f: Filters): Promise<PracticeRef | nu
  */
 export function practiceCte(f: Filters) {
   const stat = f.statistic ? sql`and statistic = ${f.statistic}` : sql``;
-  const asked = f.practice ? sql`(select id, key, label, statistic, 0 as pri from practices where id = ${f.practice}::uuid ${stat}) union all` : sql``;
+  const asked = f.practice
+    ? sql`(select id, key, label, statistic, 0 as pri from practices where id = ${f.practice}::uuid ${stat}) union all`
+    : sql``;
   return sql`p as (select id, key, label, statistic from (${asked}
     (select id, key, label, statistic, 1 as pri from practices where true ${stat} order by is_seeded desc, key limit 1)) x
     order by pri limit 1)`;

@@ -8,7 +8,8 @@ import { practiceTrailView } from "./trail-view";
 
 const NAMES = ["practice-over-time", "trail-ends", "venues", "drift", "trail-graph"] as const;
 export type DashboardName = (typeof NAMES)[number];
-export const isDashboardName = (s: string | undefined): s is DashboardName => (NAMES as readonly string[]).includes(s ?? "");
+export const isDashboardName = (s: string | undefined): s is DashboardName =>
+  (NAMES as readonly string[]).includes(s ?? "");
 
 export interface DashboardPayload {
   practice: { id: string; key: string; label: string; statistic: string } | null;
@@ -29,7 +30,14 @@ export async function dashboardData(db: DB, name: DashboardName, f: Filters): Pr
       return driftView(db, f);
     case "trail-graph": {
       const g = await practiceTrailView(db, f);
-      return { practice: g.practice, tables: { edges: { title: "Citations in the practice's trail graph", columns: g.columns, rows: g.rows as Row[] } }, notes: [], graph: { nodes: g.nodes, edges: g.edges } };
+      return {
+        practice: g.practice,
+        tables: {
+          edges: { title: "Citations in the practice's trail graph", columns: g.columns, rows: g.rows as Row[] },
+        },
+        notes: [],
+        graph: { nodes: g.nodes, edges: g.edges },
+      };
     }
   }
 }
@@ -38,7 +46,13 @@ export async function dashboardData(db: DB, name: DashboardName, f: Filters): Pr
 export function dashboardCsv(data: DashboardPayload, table?: string): { table: string; body: string } {
   const name = table ?? Object.keys(data.tables)[0];
   const t = data.tables[name];
-  if (!t) throw new HttpError(400, "invalid", `This dashboard has no table "${name}"; it has ${Object.keys(data.tables).join(", ")}.`, "table");
+  if (!t)
+    throw new HttpError(
+      400,
+      "invalid",
+      `This dashboard has no table "${name}"; it has ${Object.keys(data.tables).join(", ")}.`,
+      "table",
+    );
   return { table: name, body: toCsv(t.columns, t.rows) };
 }
 

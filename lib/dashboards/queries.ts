@@ -18,7 +18,11 @@ export interface Dashboard {
 
 const SOURCING_BY_RANK = ["cited_with_locator", "cited_no_locator", "secondary_only", "unsourced"] as const;
 const r4 = (x: number) => (Number.isFinite(x) ? Math.round(x * 10000) / 10000 : null);
-const empty = (practice: PracticeRef | null, tables: Record<string, Table>): Dashboard => ({ practice, tables, notes: [] });
+const empty = (practice: PracticeRef | null, tables: Record<string, Table>): Dashboard => ({
+  practice,
+  tables,
+  notes: [],
+});
 
 /**
  * Dashboard 1. Per year, the share of eligible articles that assert the practice, split by how the
@@ -31,7 +35,11 @@ const empty = (practice: PracticeRef | null, tables: Record<string, Table>): Das
  * year and firmest sourcing rank (from the roll-up dash_article_rank_counts).
  */
 export function practiceOverTimeSql(f: Filters) {
-  return sql<{ practice: PracticeRef | null; counts: { year: number; n: number }[]; arts: { year: number; rank: number; n: number }[] }>`
+  return sql<{
+    practice: PracticeRef | null;
+    counts: { year: number; n: number }[];
+    arts: { year: number; rank: number; n: number }[];
+  }>`
     with ${practiceCte(f)},
     counts as (select year, sum(n)::int as n from dash_article_counts where true ${countWhere(f)} group by year),
     arts as (select year, rank, sum(n)::int as n from dash_article_rank_counts
@@ -43,7 +51,15 @@ export function practiceOverTimeSql(f: Filters) {
 
 export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
   const { practice, counts, arts } = (await practiceOverTimeSql(f).execute(db)).rows[0];
-  const columns = ["year", "articles", "asserting", "share", "share_lower", "share_upper", ...SOURCING_BY_RANK.flatMap((s) => [s, `${s}_share`, `${s}_lower`, `${s}_upper`])];
+  const columns = [
+    "year",
+    "articles",
+    "asserting",
+    "share",
+    "share_lower",
+    "share_upper",
+    ...SOURCING_BY_RANK.flatMap((s) => [s, `${s}_share`, `${s}_lower`, `${s}_upper`]),
+  ];
   const table: Table = { title: "Share of articles asserting the practice, by year and sourcing", columns, rows: [] };
   if (!practice) return empty(null, { byYear: table });
   const byYear = new Map<number, number[]>();
@@ -56,7 +72,14 @@ export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
     const v = byYear.get(c.year) ?? [0, 0, 0, 0];
     const asserting = v.reduce((a, b) => a + b, 0);
     const w = wilson(asserting, c.n);
-    const row: Row = { year: c.year, articles: c.n, asserting, share: r4(w.p), share_lower: r4(w.lower), share_upper: r4(w.upper) };
+    const row: Row = {
+      year: c.year,
+      articles: c.n,
+      asserting,
+      share: r4(w.p),
+      share_lower: r4(w.lower),
+      share_upper: r4(w.upper),
+    };
     SOURCING_BY_RANK.forEach((s, i) => {
       const ws = wilson(v[i], c.n);
       row[s] = v[i];
@@ -67,21 +90,47 @@ export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
     table.rows.push(row);
   }
   const notes: string[] = [];
-  const groups = table.rows.filter((r) => Number(r.articles) > 0).map((r) => ({ score: Number(r.year), cases: Number(r.asserting), total: Number(r.articles) }));
+  const groups = table.rows
+    .filter((r) => Number(r.articles) > 0)
+    .map((r) => ({ score: Number(r.year), cases: Number(r.asserting), total: Number(r.articles) }));
   let trend: Table | null = null;
   if (groups.length >= 2) {
     const t = cochranArmitage(groups);
-    notes.push(`${t.describe({ over: "publication years" }).replace(/\.$/, "")}; Cochran–Armitage test for trend, year as score.`);
-    trend = { title: "Cochran–Armitage test for trend", columns: ["z", "chi_square", "p_value", "direction"], rows: [{ z: r4(t.z), chi_square: r4(t.chiSquare), p_value: r4(t.pValue), direction: t.direction }] };
+    notes.push(
+      `${t.describe({ over: "publication years" }).replace(/\.$/, "")}; Cochran–Armitage test for trend, year as score.`,
+    );
+    trend = {
+      title: "Cochran–Armitage test for trend",
+      columns: ["z", "chi_square", "p_value", "direction"],
+      rows: [{ z: r4(t.z), chi_square: r4(t.chiSquare), p_value: r4(t.pValue), direction: t.direction }],
+    };
   } else {
     notes.push("A test for trend needs articles from at least two years; widen the year filter.");
   }
   return { practice, tables: trend ? { byYear: table, trend } : { byYear: table }, notes };
 }
 
-export const END_KINDS = ["methods_source", "empirical_precedent", "unclassified", "unresolved", "no_citation", "cycle", "depth_limit", "not_built"] as const;
+export const END_KINDS = [
+  "methods_source",
+  "empirical_precedent",
+  "unclassified",
+  "unresolved",
+  "no_citation",
+  "cycle",
+  "depth_limit",
+  "not_built",
+] as const;
 
-type TopWork = { work_id: string; title: string | null; first_author: string | null; year: string | null; work_type: string; in_corpus: boolean; n: number; loc: number };
+type TopWork = {
+  work_id: string;
+  title: string | null;
+  first_author: string | null;
+  year: string | null;
+  work_type: string;
+  in_corpus: boolean;
+  n: number;
+  loc: number;
+};
 
 /**
  * A practice's most cited works (as CTE `top`: work_id, n, loc) under the filters. Without a venue
@@ -101,7 +150,12 @@ export function topWorksCte(f: Filters, limit: number) {
 
 /** Dashboard 2 in one statement: ends per year, trail lengths, and the ten most cited sources. */
 export function trailEndsSql(f: Filters) {
-  return sql<{ practice: PracticeRef | null; by_end: { year: number; end_kind: string; n: number }[]; by_length: { length: number; n: number }[]; top: TopWork[] }>`
+  return sql<{
+    practice: PracticeRef | null;
+    by_end: { year: number; end_kind: string; n: number }[];
+    by_length: { length: number; n: number }[];
+    top: TopWork[];
+  }>`
     with ${practiceCte(f)},
     s as (select year, end_kind, trail_length, sum(n)::int as n from dash_statement_counts
       where practice_id = (select id from p) ${factWhere(f)} group by 1, 2, 3),
@@ -120,11 +174,27 @@ export function trailEndsSql(f: Filters) {
 export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
   const { practice, by_end: byEnd, by_length: byLength, top } = (await trailEndsSql(f).execute(db)).rows[0];
   const endCols = ["year", "statements", ...END_KINDS.flatMap((k) => [k, `${k}_share`])];
-  const ends: Table = { title: "Where trails end, by year (share of the practice's statements)", columns: endCols, rows: [] };
+  const ends: Table = {
+    title: "Where trails end, by year (share of the practice's statements)",
+    columns: endCols,
+    rows: [],
+  };
   const lengths: Table = { title: "Trail length (citation hops)", columns: ["length", "statements"], rows: [] };
   const sources: Table = {
     title: "Most cited sources for the practice",
-    columns: ["work_id", "title", "first_author", "year", "work_type", "in_corpus", "citations", "with_locator", "locator_rate", "locator_lower", "locator_upper"],
+    columns: [
+      "work_id",
+      "title",
+      "first_author",
+      "year",
+      "work_type",
+      "in_corpus",
+      "citations",
+      "with_locator",
+      "locator_rate",
+      "locator_lower",
+      "locator_upper",
+    ],
     rows: [],
   };
   if (!practice) return empty(null, { ends, lengths, sources });
@@ -146,7 +216,19 @@ export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
   lengths.rows = byLength.map((r) => ({ length: r.length, statements: r.n }));
   sources.rows = top.map((r) => {
     const w = wilson(r.loc, r.n);
-    return { work_id: r.work_id, title: r.title, first_author: r.first_author, year: r.year, work_type: r.work_type, in_corpus: r.in_corpus, citations: r.n, with_locator: r.loc, locator_rate: r4(w.p), locator_lower: r4(w.lower), locator_upper: r4(w.upper) };
+    return {
+      work_id: r.work_id,
+      title: r.title,
+      first_author: r.first_author,
+      year: r.year,
+      work_type: r.work_type,
+      in_corpus: r.in_corpus,
+      citations: r.n,
+      with_locator: r.loc,
+      locator_rate: r4(w.p),
+      locator_lower: r4(w.lower),
+      locator_upper: r4(w.upper),
+    };
   });
   return { practice, tables: { ends, lengths, sources }, notes: [] };
 }
@@ -156,7 +238,15 @@ export async function trailEnds(db: DB, f: Filters): Promise<Dashboard> {
  * the share of its citations for the practice that go to its own earlier articles (same venue, not published
  * in a later year). Each venue is compared with the rest of the corpus (the other venues pooled) by Newcombe's hybrid interval.
  */
-type VenueCounts = { venue_id: string; venue: string; is_methods_venue: boolean; articles: number; asserting: number; citations: number; in_venue: number };
+type VenueCounts = {
+  venue_id: string;
+  venue: string;
+  is_methods_venue: boolean;
+  articles: number;
+  asserting: number;
+  citations: number;
+  in_venue: number;
+};
 
 /** Dashboard 4 in one statement, over the roll-ups (articles, asserting articles, citations). */
 export function venueComparisonSql(f: Filters) {
@@ -178,30 +268,79 @@ export async function venueComparison(db: DB, f: Filters): Promise<Dashboard> {
   const table: Table = {
     title: "Venues: share of articles asserting the practice, and in-venue precedent",
     columns: [
-      "venue_id", "venue", "is_methods_venue", "articles", "asserting", "rate", "rate_lower", "rate_upper", "rate_vs_rest", "rate_vs_rest_lower", "rate_vs_rest_upper",
-      "citations", "in_venue", "in_venue_share", "in_venue_lower", "in_venue_upper", "in_venue_vs_rest", "in_venue_vs_rest_lower", "in_venue_vs_rest_upper",
+      "venue_id",
+      "venue",
+      "is_methods_venue",
+      "articles",
+      "asserting",
+      "rate",
+      "rate_lower",
+      "rate_upper",
+      "rate_vs_rest",
+      "rate_vs_rest_lower",
+      "rate_vs_rest_upper",
+      "citations",
+      "in_venue",
+      "in_venue_share",
+      "in_venue_lower",
+      "in_venue_upper",
+      "in_venue_vs_rest",
+      "in_venue_vs_rest_lower",
+      "in_venue_vs_rest_upper",
     ],
     rows: [],
   };
   if (!practice) return empty(null, { venues: table });
   const r = { rows: venues };
-  const tot = r.rows.reduce((s, x) => ({ articles: s.articles + x.articles, asserting: s.asserting + x.asserting, citations: s.citations + x.citations, in_venue: s.in_venue + x.in_venue }), { articles: 0, asserting: 0, citations: 0, in_venue: 0 });
+  const tot = r.rows.reduce(
+    (s, x) => ({
+      articles: s.articles + x.articles,
+      asserting: s.asserting + x.asserting,
+      citations: s.citations + x.citations,
+      in_venue: s.in_venue + x.in_venue,
+    }),
+    { articles: 0, asserting: 0, citations: 0, in_venue: 0 },
+  );
   for (const v of r.rows) {
     const rate = wilson(v.asserting, v.articles);
     const own = wilson(v.in_venue, v.citations);
     const restN = tot.articles - v.articles;
     const restC = tot.citations - v.citations;
-    const d1 = v.articles > 0 && restN > 0 ? newcombeDifference(v.asserting, v.articles, tot.asserting - v.asserting, restN) : null;
-    const d2 = v.citations > 0 && restC > 0 ? newcombeDifference(v.in_venue, v.citations, tot.in_venue - v.in_venue, restC) : null;
+    const d1 =
+      v.articles > 0 && restN > 0
+        ? newcombeDifference(v.asserting, v.articles, tot.asserting - v.asserting, restN)
+        : null;
+    const d2 =
+      v.citations > 0 && restC > 0
+        ? newcombeDifference(v.in_venue, v.citations, tot.in_venue - v.in_venue, restC)
+        : null;
     table.rows.push({
-      venue_id: v.venue_id, venue: v.venue, is_methods_venue: v.is_methods_venue, articles: v.articles, asserting: v.asserting,
-      rate: r4(rate.p), rate_lower: r4(rate.lower), rate_upper: r4(rate.upper),
-      rate_vs_rest: d1 ? r4(d1.difference) : null, rate_vs_rest_lower: d1 ? r4(d1.lower) : null, rate_vs_rest_upper: d1 ? r4(d1.upper) : null,
-      citations: v.citations, in_venue: v.in_venue, in_venue_share: r4(own.p), in_venue_lower: r4(own.lower), in_venue_upper: r4(own.upper),
-      in_venue_vs_rest: d2 ? r4(d2.difference) : null, in_venue_vs_rest_lower: d2 ? r4(d2.lower) : null, in_venue_vs_rest_upper: d2 ? r4(d2.upper) : null,
+      venue_id: v.venue_id,
+      venue: v.venue,
+      is_methods_venue: v.is_methods_venue,
+      articles: v.articles,
+      asserting: v.asserting,
+      rate: r4(rate.p),
+      rate_lower: r4(rate.lower),
+      rate_upper: r4(rate.upper),
+      rate_vs_rest: d1 ? r4(d1.difference) : null,
+      rate_vs_rest_lower: d1 ? r4(d1.lower) : null,
+      rate_vs_rest_upper: d1 ? r4(d1.upper) : null,
+      citations: v.citations,
+      in_venue: v.in_venue,
+      in_venue_share: r4(own.p),
+      in_venue_lower: r4(own.lower),
+      in_venue_upper: r4(own.upper),
+      in_venue_vs_rest: d2 ? r4(d2.difference) : null,
+      in_venue_vs_rest_lower: d2 ? r4(d2.lower) : null,
+      in_venue_vs_rest_upper: d2 ? r4(d2.upper) : null,
     });
   }
-  return { practice, tables: { venues: table }, notes: ["Differences compare a venue with all other venues pooled (Newcombe's hybrid score interval, 95%)."] };
+  return {
+    practice,
+    tables: { venues: table },
+    notes: ["Differences compare a venue with all other venues pooled (Newcombe's hybrid score interval, 95%)."],
+  };
 }
 
 export const DASHBOARDS = {

@@ -60,17 +60,37 @@ function asTable(nodes: GraphNode[], edges: GraphEdge[]) {
 }
 
 /** One statement's trail as a graph, built live from the citation graph. */
-export async function statementTrailView(db: DB, statementId: string, practiceId: string): Promise<TrailGraphView | null> {
+export async function statementTrailView(
+  db: DB,
+  statementId: string,
+  practiceId: string,
+): Promise<TrailGraphView | null> {
   const trail = await statementTrail(db, statementId, practiceId);
   if (!trail) return null;
-  const practice = (await db.selectFrom("practices").select(["id", "key", "label", "statistic"]).where("id", "=", practiceId).executeTakeFirst()) ?? null;
+  const practice =
+    (await db
+      .selectFrom("practices")
+      .select(["id", "key", "label", "statistic"])
+      .where("id", "=", practiceId)
+      .executeTakeFirst()) ?? null;
   const stmtIds = trail.nodes.flatMap((n) => (n.kind === "statement" ? [n.statementId] : []));
   const workIds = trail.nodes.flatMap((n) => (n.kind === "work" ? [n.workId] : []));
   const [stmts, works] = await Promise.all([
     stmtIds.length
-      ? db.selectFrom("statements as s").innerJoin("articles as a", "a.id", "s.article_id").select(["s.id", "s.sentence", "a.id as article_id", "a.title", "a.year"]).where("s.id", "in", stmtIds).execute()
+      ? db
+          .selectFrom("statements as s")
+          .innerJoin("articles as a", "a.id", "s.article_id")
+          .select(["s.id", "s.sentence", "a.id as article_id", "a.title", "a.year"])
+          .where("s.id", "in", stmtIds)
+          .execute()
       : [],
-    workIds.length ? db.selectFrom("works").select(["id", "title", "first_author", "year", "work_type"]).where("id", "in", workIds).execute() : [],
+    workIds.length
+      ? db
+          .selectFrom("works")
+          .select(["id", "title", "first_author", "year", "work_type"])
+          .where("id", "in", workIds)
+          .execute()
+      : [],
   ]);
   const sMap = new Map(stmts.map((s) => [s.id, s]));
   const wMap = new Map(works.map((w) => [w.id, w]));
@@ -78,12 +98,27 @@ export async function statementTrailView(db: DB, statementId: string, practiceId
   const nodes: GraphNode[] = trail.nodes.map((n) => {
     if (n.kind === "statement") {
       const s = sMap.get(n.statementId);
-      return { id: n.id, kind: "statement", label: short(s?.title ?? null, "Untitled article"), year: s?.year ?? null, href: statementHref(n.articleId, n.statementId), sentence: s?.sentence };
+      return {
+        id: n.id,
+        kind: "statement",
+        label: short(s?.title ?? null, "Untitled article"),
+        year: s?.year ?? null,
+        href: statementHref(n.articleId, n.statementId),
+        sentence: s?.sentence,
+      };
     }
     if (n.kind === "work") {
       const w = wMap.get(n.workId);
       const y = Number.parseInt(w?.year ?? "", 10);
-      return { id: n.id, kind: "work", label: short(w?.title ?? null, w?.first_author ?? "Untitled work"), year: Number.isFinite(y) ? y : null, href: `/works/${n.workId}`, workType: n.type, end: endByWork.get(n.workId) ?? null };
+      return {
+        id: n.id,
+        kind: "work",
+        label: short(w?.title ?? null, w?.first_author ?? "Untitled work"),
+        year: Number.isFinite(y) ? y : null,
+        href: `/works/${n.workId}`,
+        workType: n.type,
+        end: endByWork.get(n.workId) ?? null,
+      };
     }
     return { id: n.id, kind: "unresolved", label: "Unresolved reference", year: null, href: null, end: "unresolved" };
   });
@@ -105,8 +140,20 @@ export async function statementTrailView(db: DB, statementId: string, practiceId
  * linked to that article's work.
  */
 type PracticeEdgeRow = {
-  statement_id: string; article_id: string; year: number; work_id: string; cited_article_id: string | null; locator: string | null; secondary: boolean;
-  sentence: string; title: string | null; w_title: string | null; w_author: string | null; w_year: string | null; w_type: string; end_kind: string | null;
+  statement_id: string;
+  article_id: string;
+  year: number;
+  work_id: string;
+  cited_article_id: string | null;
+  locator: string | null;
+  secondary: boolean;
+  sentence: string;
+  title: string | null;
+  w_title: string | null;
+  w_author: string | null;
+  w_year: string | null;
+  w_type: string;
+  end_kind: string | null;
 };
 
 /**
@@ -146,7 +193,11 @@ export function practiceTrailSql(f: Filters, limits = { works: 15, statements: 6
  * citing them (bounded, so the picture stays readable), with statements inside a cited article
  * linked to that article's work.
  */
-export async function practiceTrailView(db: DB, f: Filters, limits = { works: 15, statements: 60 }): Promise<TrailGraphView> {
+export async function practiceTrailView(
+  db: DB,
+  f: Filters,
+  limits = { works: 15, statements: 60 },
+): Promise<TrailGraphView> {
   const { practice, rows } = (await practiceTrailSql(f, limits).execute(db)).rows[0];
   if (!practice) return { practice: null, nodes: [], edges: [], ...asTable([], []) };
   const r = { rows };
@@ -156,13 +207,37 @@ export async function practiceTrailView(db: DB, f: Filters, limits = { works: 15
   for (const x of r.rows) {
     const sid = `statement:${x.statement_id}`;
     if (!nodes.has(sid)) {
-      nodes.set(sid, { id: sid, kind: "statement", label: short(x.title, "Untitled article"), year: x.year, href: statementHref(x.article_id, x.statement_id), sentence: x.sentence, end: x.end_kind });
+      nodes.set(sid, {
+        id: sid,
+        kind: "statement",
+        label: short(x.title, "Untitled article"),
+        year: x.year,
+        href: statementHref(x.article_id, x.statement_id),
+        sentence: x.sentence,
+        end: x.end_kind,
+      });
       stmtsByArticle.set(x.article_id, [...(stmtsByArticle.get(x.article_id) ?? []), sid]);
     }
     const wid = `work:${x.work_id}`;
     const y = Number.parseInt(x.w_year ?? "", 10);
-    if (!nodes.has(wid)) nodes.set(wid, { id: wid, kind: "work", label: short(x.w_title, x.w_author ?? "Untitled work"), year: Number.isFinite(y) ? y : null, href: `/works/${x.work_id}`, workType: x.w_type });
-    edges.push({ id: `c${edges.length}`, from: sid, to: wid, kind: "cites", locator: x.locator, secondary: x.secondary, count: 1 });
+    if (!nodes.has(wid))
+      nodes.set(wid, {
+        id: wid,
+        kind: "work",
+        label: short(x.w_title, x.w_author ?? "Untitled work"),
+        year: Number.isFinite(y) ? y : null,
+        href: `/works/${x.work_id}`,
+        workType: x.w_type,
+      });
+    edges.push({
+      id: `c${edges.length}`,
+      from: sid,
+      to: wid,
+      kind: "cites",
+      locator: x.locator,
+      secondary: x.secondary,
+      count: 1,
+    });
   }
   const seen = new Set<string>();
   for (const x of r.rows) {
@@ -171,7 +246,15 @@ export async function practiceTrailView(db: DB, f: Filters, limits = { works: 15
       const id = `a:${x.work_id}:${sid}`;
       if (seen.has(id)) continue;
       seen.add(id);
-      edges.push({ id, from: `work:${x.work_id}`, to: sid, kind: "asserted_in", locator: null, secondary: false, count: 1 });
+      edges.push({
+        id,
+        from: `work:${x.work_id}`,
+        to: sid,
+        kind: "asserted_in",
+        locator: null,
+        secondary: false,
+        count: 1,
+      });
     }
   }
   const ns = [...nodes.values()];

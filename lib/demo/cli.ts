@@ -18,7 +18,13 @@ function intOption(name: string, raw: string | undefined, fallback: number): num
 
 async function main(): Promise<void> {
   const { values } = parseArgs({
-    options: { out: { type: "string" }, count: { type: "string" }, seed: { type: "string" }, pages: { type: "string" }, help: { type: "boolean" } },
+    options: {
+      out: { type: "string" },
+      count: { type: "string" },
+      seed: { type: "string" },
+      pages: { type: "string" },
+      help: { type: "boolean" },
+    },
     strict: true,
   });
   if (values.help || !values.out) {

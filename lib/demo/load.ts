@@ -36,7 +36,13 @@ export async function ensureDemoVenues(db: DB, venues: readonly DemoVenue[]): Pr
     }
     const row = await db
       .insertInto("venues")
-      .values({ name: v.name, abbreviation: v.abbreviation, issn: null, is_methods_venue: v.isMethodsVenue, is_demo: true })
+      .values({
+        name: v.name,
+        abbreviation: v.abbreviation,
+        issn: null,
+        is_methods_venue: v.isMethodsVenue,
+        is_demo: true,
+      })
       .returning("id")
       .executeTakeFirstOrThrow();
     ids.set(v.key, row.id);
@@ -57,7 +63,10 @@ async function cachedPdf(file: string, render: () => Promise<Buffer>): Promise<U
   }
 }
 
-export async function loadDemoCorpus(db: DB, opts: LoadDemoOptions = {}): Promise<{ created: number; skipped: number }> {
+export async function loadDemoCorpus(
+  db: DB,
+  opts: LoadDemoOptions = {},
+): Promise<{ created: number; skipped: number }> {
   const log = opts.log ?? (() => {});
   const seed = opts.seed ?? DEFAULT_SEED;
   const count = opts.count ?? DEFAULT_COUNT;
@@ -82,7 +91,11 @@ export async function loadDemoCorpus(db: DB, opts: LoadDemoOptions = {}): Promis
     }
     // A corpus generated with another count or seed reuses DOIs for different files: keep the
     // article that is there rather than fail the start.
-    const sameDoi = await db.selectFrom("articles").select("id").where(sql<string>`lower(doi)`, "=", a.doi.toLowerCase()).executeTakeFirst();
+    const sameDoi = await db
+      .selectFrom("articles")
+      .select("id")
+      .where(sql<string>`lower(doi)`, "=", a.doi.toLowerCase())
+      .executeTakeFirst();
     if (sameDoi) {
       skipped++;
       doiTaken++;
@@ -112,9 +125,17 @@ export async function loadDemoCorpus(db: DB, opts: LoadDemoOptions = {}): Promis
         doiTaken++;
       } else throw err;
     }
-    if ((i + 1) % 50 === 0) log(`demo: ${i + 1}/${corpus.articles.length} files (${created} new) in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+    if ((i + 1) % 50 === 0)
+      log(
+        `demo: ${i + 1}/${corpus.articles.length} files (${created} new) in ${((Date.now() - started) / 1000).toFixed(1)} s`,
+      );
   }
-  if (doiTaken) log(`demo: ${doiTaken} files skipped because an article already has their DOI (a demo corpus of another size or seed was loaded before)`);
-  log(`demo: ${created} articles queued for mining, ${skipped} already present (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  if (doiTaken)
+    log(
+      `demo: ${doiTaken} files skipped because an article already has their DOI (a demo corpus of another size or seed was loaded before)`,
+    );
+  log(
+    `demo: ${created} articles queued for mining, ${skipped} already present (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+  );
   return { created, skipped };
 }

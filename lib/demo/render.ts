@@ -14,7 +14,10 @@ import type { DemoArticle, DemoCorpus, DemoPerson } from "./corpus";
 // fonts-dejavu). Headings, the title block and running heads use core fonts: their text is plain
 // Latin, and parsing one TrueType font per PDF instead of four keeps rendering fast (font parsing is
 // most of the cost). Liberation Serif has the metrics of Times, so the two faces sit well together.
-const BODY_FONT_CANDIDATES = ["/usr/share/fonts/truetype/liberation/LiberationSerif-Regular.ttf", "/usr/share/fonts/truetype/dejavu/DejaVuSerif.ttf"];
+const BODY_FONT_CANDIDATES = [
+  "/usr/share/fonts/truetype/liberation/LiberationSerif-Regular.ttf",
+  "/usr/share/fonts/truetype/dejavu/DejaVuSerif.ttf",
+];
 const CORE = { serif: "Times-Roman", serifBold: "Times-Bold", serifItalic: "Times-Italic", sans: "Helvetica" } as const;
 type FontRole = keyof typeof CORE;
 
@@ -27,7 +30,19 @@ function loadBodyFont(): Buffer | null {
   return bodyFont;
 }
 
-const ASCII_FALLBACK: [RegExp, string][] = [[/α/g, "alpha"], [/β/g, "beta"], [/χ²/g, "chi-square"], [/≥/g, ">="], [/≤/g, "<="], [/[ćč]/g, "c"], [/[śš]/g, "s"], [/ğ/g, "g"], [/ł/g, "l"], [/Ç/g, "C"], [/ç/g, "c"]];
+const ASCII_FALLBACK: [RegExp, string][] = [
+  [/α/g, "alpha"],
+  [/β/g, "beta"],
+  [/χ²/g, "chi-square"],
+  [/≥/g, ">="],
+  [/≤/g, "<="],
+  [/[ćč]/g, "c"],
+  [/[śš]/g, "s"],
+  [/ğ/g, "g"],
+  [/ł/g, "l"],
+  [/Ç/g, "C"],
+  [/ç/g, "c"],
+];
 const toWinAnsi = (s: string) => ASCII_FALLBACK.reduce((acc, [re, rep]) => acc.replace(re, rep), s);
 
 const A4 = { w: 595.28, h: 841.89 };
@@ -118,7 +133,19 @@ class Layout {
     if (cur.length) out.push({ text: cur.join(" "), indent });
     return out;
   }
-  paragraph(s: string, role: FontRole, size: number, leading: number, opts: { firstIndent?: number; restIndent?: number; after?: number; keepWithNext?: number; fullWidth?: boolean } = {}) {
+  paragraph(
+    s: string,
+    role: FontRole,
+    size: number,
+    leading: number,
+    opts: {
+      firstIndent?: number;
+      restIndent?: number;
+      after?: number;
+      keepWithNext?: number;
+      fullWidth?: boolean;
+    } = {},
+  ) {
     this.setFont(role, size);
     const width = opts.fullWidth ? A4.w - MARGIN.left - MARGIN.right : this.colWidth;
     const ls = this.lines(s, width, opts.firstIndent ?? 0, opts.restIndent ?? 0);
@@ -181,12 +208,21 @@ export async function renderArticlePdf(article: DemoArticle, opts: RenderOptions
   const cols = opts.columns ?? (article.twoColumn ? 2 : 1);
   const L = new Layout(doc, 1, text, fontName, MARGIN.top - 20);
   L.paragraph(`${article.venueName} · invented demo venue`, "sans", 9, 12, { fullWidth: true });
-  L.paragraph(`Volume ${article.volume}, Issue ${article.issue}, ${article.year}`, "sans", 9, 12, { fullWidth: true, after: 14 });
+  L.paragraph(`Volume ${article.volume}, Issue ${article.issue}, ${article.year}`, "sans", 9, 12, {
+    fullWidth: true,
+    after: 14,
+  });
   L.paragraph(article.title, "serifBold", 17, 21, { fullWidth: true, after: 8 });
   L.paragraph(authorLine(article.authors), "serif", 11.5, 15, { fullWidth: true, after: 6 });
   L.paragraph(INVENTED_LINE, "serifItalic", 10, 13, { fullWidth: true });
   L.paragraph(`https://doi.org/${article.doi}`, "sans", 9, 12, { fullWidth: true });
-  L.paragraph(`Licence: ${article.licence}. This article may be copied, mined and reused with attribution.`, "sans", 9, 12, { fullWidth: true, after: 12 });
+  L.paragraph(
+    `Licence: ${article.licence}. This article may be copied, mined and reused with attribution.`,
+    "sans",
+    9,
+    12,
+    { fullWidth: true, after: 12 },
+  );
   L.paragraph("Abstract", "serifBold", 10.5, 14, { fullWidth: true });
   L.paragraph(article.abstract, "serif", 10, 13, { fullWidth: true, after: 4 });
   L.paragraph(`Keywords: ${article.keywords.join(", ")}`, "serifItalic", 9.5, 12, { fullWidth: true, after: 16 });
@@ -196,7 +232,11 @@ export async function renderArticlePdf(article: DemoArticle, opts: RenderOptions
   const size = cols === 2 ? 9.8 : 11;
   const leading = cols === 2 ? 12.4 : 14.6;
   for (const b of article.blocks) {
-    if (b.heading) B.paragraph(b.heading, "serifBold", b.level === 1 ? size + 1.5 : size + 0.3, leading + 2, { keepWithNext: 2, after: 2 });
+    if (b.heading)
+      B.paragraph(b.heading, "serifBold", b.level === 1 ? size + 1.5 : size + 0.3, leading + 2, {
+        keepWithNext: 2,
+        after: 2,
+      });
     for (const p of b.paragraphs) {
       if (b.section === "references") {
         for (const s of p) B.paragraph(s.text, "serif", size - 0.6, leading - 1.2, { restIndent: 14, after: 2 });
@@ -216,7 +256,11 @@ export async function renderArticlePdf(article: DemoArticle, opts: RenderOptions
       doc.text(text("sans", `${article.venueName} · invented demo venue`), MARGIN.left, 34, { lineBreak: false });
       const right = `${article.year}, ${article.volume}(${article.issue})`;
       doc.text(right, A4.w - MARGIN.right - doc.widthOfString(right), 34, { lineBreak: false });
-      doc.moveTo(MARGIN.left, 46).lineTo(A4.w - MARGIN.right, 46).lineWidth(0.4).stroke();
+      doc
+        .moveTo(MARGIN.left, 46)
+        .lineTo(A4.w - MARGIN.right, 46)
+        .lineWidth(0.4)
+        .stroke();
     }
     const num = String(pageNo);
     doc.text(num, (A4.w - doc.widthOfString(num)) / 2, A4.h - 38, { lineBreak: false });

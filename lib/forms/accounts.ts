@@ -2,7 +2,12 @@ import { z } from "zod";
 import { ROLES } from "@/db/schema/accounts";
 
 // One schema per form, used by the browser (field errors before sending) and by the route handler.
-export const emailField = z.string().trim().toLowerCase().max(254, "At most 254 characters.").email("Enter an e-mail address like name@example.org.");
+export const emailField = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254, "At most 254 characters.")
+  .email("Enter an e-mail address like name@example.org.");
 
 export const passwordSignInSchema = z.object({
   email: emailField,
@@ -11,10 +16,7 @@ export const passwordSignInSchema = z.object({
 
 export const magicLinkSchema = z.object({ email: emailField });
 
-export const newPasswordField = z
-  .string()
-  .min(10, "Use at least 10 characters.")
-  .max(200, "At most 200 characters.");
+export const newPasswordField = z.string().min(10, "Use at least 10 characters.").max(200, "At most 200 characters.");
 
 export const acceptInvitationSchema = z
   .object({
@@ -39,11 +41,18 @@ export const userPatchSchema = z
     active: z.boolean().optional(),
     venueIds: z.array(z.string().uuid()).max(50).optional(),
   })
-  .refine((v) => v.role !== undefined || v.active !== undefined || v.venueIds !== undefined, { message: "Nothing to change." });
+  .refine((v) => v.role !== undefined || v.active !== undefined || v.venueIds !== undefined, {
+    message: "Nothing to change.",
+  });
 
 export const venueSchema = z.object({
   name: z.string().trim().min(2, "Enter the venue's name.").max(200, "At most 200 characters."),
-  abbreviation: z.string().trim().max(40, "At most 40 characters.").optional().transform((v) => v || null),
+  abbreviation: z
+    .string()
+    .trim()
+    .max(40, "At most 40 characters.")
+    .optional()
+    .transform((v) => v || null),
   issn: z
     .string()
     .trim()

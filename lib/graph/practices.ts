@@ -7,7 +7,11 @@ export async function loadPractices(db: DB, practiceIds?: readonly string[]): Pr
   let q = db.selectFrom("practices").select(["id", "statistic", "comparator", "value", "framing"]);
   if (practiceIds) q = q.where("id", "=", sql<string>`any(${practiceIds as string[]}::uuid[])`);
   const rows = await q.execute();
-  return rows.flatMap((p) => (isStatisticKey(p.statistic) ? [{ id: p.id, statistic: p.statistic, comparator: p.comparator, value: p.value, framing: p.framing }] : []));
+  return rows.flatMap((p) =>
+    isStatisticKey(p.statistic)
+      ? [{ id: p.id, statistic: p.statistic, comparator: p.comparator, value: p.value, framing: p.framing }]
+      : [],
+  );
 }
 
 interface StatementRow {
@@ -21,7 +25,12 @@ interface StatementRow {
 function pairs(statements: StatementRow[], practices: Practice[]): { statement_id: string; practice_id: string }[] {
   const out: { statement_id: string; practice_id: string }[] = [];
   for (const s of statements) {
-    const stmt: ThresholdStatement = { statistic: isStatisticKey(s.statistic) ? s.statistic : null, comparator: s.comparator, value: s.value, framing: s.framing };
+    const stmt: ThresholdStatement = {
+      statistic: isStatisticKey(s.statistic) ? s.statistic : null,
+      comparator: s.comparator,
+      value: s.value,
+      framing: s.framing,
+    };
     for (const pid of matchPractices(stmt, practices)) out.push({ statement_id: s.id, practice_id: pid });
   }
   return out;

@@ -1,6 +1,14 @@
 import { sql } from "kysely";
 import type { DB } from "@/db";
-import { firstAuthorSurname, normaliseDoi, normaliseTitle, normaliseYear, resolveReference, type ParsedReference, type WorkCandidate } from "@/lib/resolve";
+import {
+  firstAuthorSurname,
+  normaliseDoi,
+  normaliseTitle,
+  normaliseYear,
+  resolveReference,
+  type ParsedReference,
+  type WorkCandidate,
+} from "@/lib/resolve";
 import { typeWorks } from "./works";
 
 interface WorkRow {
@@ -12,7 +20,13 @@ interface WorkRow {
   article_id: string | null;
 }
 
-const asCandidate = (w: WorkRow): WorkCandidate => ({ id: w.id, doi: w.doi, title: w.title, firstAuthor: w.first_author, year: w.year });
+const asCandidate = (w: WorkRow): WorkCandidate => ({
+  id: w.id,
+  doi: w.doi,
+  title: w.title,
+  firstAuthor: w.first_author,
+  year: w.year,
+});
 
 /** Works worth scoring against a reference: same DOI, or same first-author surname and year, or same normalised title. */
 async function candidatesFor(db: DB, ref: ParsedReference): Promise<WorkRow[]> {
@@ -50,12 +64,25 @@ function workValues(ref: ParsedReference, kind: "book" | "chapter" | "article" |
  * that matches the article (DOI, else title + first author + year) becomes the article's work, so
  * their trails now run into it. Returns the work id and whether an existing work was taken over.
  */
-export async function ensureArticleWork(db: DB, articleId: string): Promise<{ workId: string; adopted: boolean } | null> {
-  const a = await db.selectFrom("articles").select(["id", "doi", "title", "authors", "year"]).where("id", "=", articleId).executeTakeFirst();
+export async function ensureArticleWork(
+  db: DB,
+  articleId: string,
+): Promise<{ workId: string; adopted: boolean } | null> {
+  const a = await db
+    .selectFrom("articles")
+    .select(["id", "doi", "title", "authors", "year"])
+    .where("id", "=", articleId)
+    .executeTakeFirst();
   if (!a) return null;
   const own = await db.selectFrom("works").select("id").where("article_id", "=", articleId).executeTakeFirst();
   if (own) return { workId: own.id, adopted: false };
-  const asRef: ParsedReference = { raw: a.title ?? "", authors: Array.isArray(a.authors) ? a.authors : [], year: a.year === null ? null : String(a.year), title: a.title, doi: a.doi };
+  const asRef: ParsedReference = {
+    raw: a.title ?? "",
+    authors: Array.isArray(a.authors) ? a.authors : [],
+    year: a.year === null ? null : String(a.year),
+    title: a.title,
+    doi: a.doi,
+  };
   const outside = (await candidatesFor(db, asRef)).filter((w) => w.article_id === null);
   const hit = resolveReference(asRef, outside.map(asCandidate));
   if (hit) {
@@ -63,7 +90,11 @@ export async function ensureArticleWork(db: DB, articleId: string): Promise<{ wo
     await typeWorks(db, [hit.id]);
     return { workId: hit.id, adopted: true };
   }
-  const w = await db.insertInto("works").values(workValues(asRef, "article", articleId)).returning("id").executeTakeFirstOrThrow();
+  const w = await db
+    .insertInto("works")
+    .values(workValues(asRef, "article", articleId))
+    .returning("id")
+    .executeTakeFirstOrThrow();
   await typeWorks(db, [w.id]);
   return { workId: w.id, adopted: false };
 }
@@ -75,11 +106,25 @@ export async function ensureArticleWork(db: DB, articleId: string): Promise<{ wo
  * are left alone, and so are those a curator placed by a merge or split; those resolved to an outside
  * work are re-scored, so they move to a corpus article that arrived since.
  */
-export async function resolveArticleReferences(db: DB, articleId: string): Promise<{ resolved: number; created: number }> {
+export async function resolveArticleReferences(
+  db: DB,
+  articleId: string,
+): Promise<{ resolved: number; created: number }> {
   const refs = await db
     .selectFrom("references as r")
     .leftJoin("works as w", "w.id", "r.work_id")
-    .select(["r.id", "r.raw", "r.authors", "r.year", "r.title", "r.doi", "r.container", "r.kind", "r.work_id", "w.article_id as work_article"])
+    .select([
+      "r.id",
+      "r.raw",
+      "r.authors",
+      "r.year",
+      "r.title",
+      "r.doi",
+      "r.container",
+      "r.kind",
+      "r.work_id",
+      "w.article_id as work_article",
+    ])
     .where("r.article_id", "=", articleId)
     .where("r.work_set_by", "<>", "curator")
     .orderBy("r.ordinal")
@@ -89,7 +134,15 @@ export async function resolveArticleReferences(db: DB, articleId: string): Promi
   const touched: string[] = [];
   for (const r of refs) {
     if (r.work_id && r.work_article) continue;
-    const ref: ParsedReference = { raw: r.raw, authors: Array.isArray(r.authors) ? r.authors : [], year: r.year, title: r.title, doi: r.doi, container: r.container, kind: r.kind };
+    const ref: ParsedReference = {
+      raw: r.raw,
+      authors: Array.isArray(r.authors) ? r.authors : [],
+      year: r.year,
+      title: r.title,
+      doi: r.doi,
+      container: r.container,
+      kind: r.kind,
+    };
     const cands = (await candidatesFor(db, ref)).filter((w) => w.article_id !== articleId);
     // Prefer one of our articles: a reference that means a corpus article must lead into the corpus.
     const corpus = cands.filter((w) => w.article_id !== null);
@@ -98,7 +151,11 @@ export async function resolveArticleReferences(db: DB, articleId: string): Promi
     if (!workId && r.work_id) continue; // keep the existing outside work
     if (!workId) {
       if (!ref.doi && !ref.title && !firstAuthorSurname(ref.authors)) continue; // nothing to make a work from: stays unresolved
-      const w = await db.insertInto("works").values(workValues(ref, r.kind, null)).returning("id").executeTakeFirstOrThrow();
+      const w = await db
+        .insertInto("works")
+        .values(workValues(ref, r.kind, null))
+        .returning("id")
+        .executeTakeFirstOrThrow();
       workId = w.id;
       created++;
     }
@@ -118,7 +175,11 @@ export async function resolveArticleReferences(db: DB, articleId: string): Promi
  * over. Their resolution is re-run when this article arrives, and with it their trails.
  */
 export async function articlesThatMayCite(db: DB, articleId: string): Promise<string[]> {
-  const a = await db.selectFrom("articles").select(["doi", "authors", "year"]).where("id", "=", articleId).executeTakeFirst();
+  const a = await db
+    .selectFrom("articles")
+    .select(["doi", "authors", "year"])
+    .where("id", "=", articleId)
+    .executeTakeFirst();
   if (!a) return [];
   const doi = normaliseDoi(a.doi);
   const surname = firstAuthorSurname(Array.isArray(a.authors) ? a.authors : []);
@@ -127,6 +188,8 @@ export async function articlesThatMayCite(db: DB, articleId: string): Promise<st
     where r.article_id <> ${articleId} and (w.article_id = ${articleId} or w.article_id is null or w.id is null) and (
       w.article_id = ${articleId}
       or ${doi ? sql`lower(r.doi) = ${doi}` : sql`false`}
-      or ${surname && a.year ? sql`(r.year like ${String(a.year) + "%"} and r.authors->>0 ilike ${"%" + surname + "%"})` : sql`false`})`.execute(db);
+      or ${surname && a.year ? sql`(r.year like ${String(a.year) + "%"} and r.authors->>0 ilike ${"%" + surname + "%"})` : sql`false`})`.execute(
+    db,
+  );
   return r.rows.map((x) => x.article_id);
 }

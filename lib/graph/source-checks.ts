@@ -19,7 +19,13 @@ export async function recordSourceCheck(db: DB, c: SourceCheckInput): Promise<{ 
     db.selectFrom("practices").select("id").where("id", "=", c.practiceId).executeTakeFirst(),
   ]);
   if (!w || !p) return null;
-  const values = { verdict: c.verdict, page: c.page || null, quote: c.quote || null, stated_value: c.statedValue ?? null, checked_by: c.checkedBy };
+  const values = {
+    verdict: c.verdict,
+    page: c.page || null,
+    quote: c.quote || null,
+    stated_value: c.statedValue ?? null,
+    checked_by: c.checkedBy,
+  };
   return db
     .insertInto("source_checks")
     .values({ work_id: c.workId, practice_id: c.practiceId, ...values })

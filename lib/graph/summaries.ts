@@ -18,12 +18,17 @@ export const SUMMARY_VIEWS = [
  * the unique indexes the migrations made); a never-populated view cannot be refreshed concurrently.
  * `timings`, when given, receives the seconds each view took (the benchmark reports them).
  */
-export async function refreshSummaries(db: DB, opts: { concurrently?: boolean; timings?: Record<string, number> } = {}): Promise<void> {
+export async function refreshSummaries(
+  db: DB,
+  opts: { concurrently?: boolean; timings?: Record<string, number> } = {},
+): Promise<void> {
   const c = opts.concurrently ?? true;
   const took = opts.timings ?? {};
   for (const view of SUMMARY_VIEWS) {
     const started = performance.now();
-    const populated = await sql<{ p: boolean }>`select ispopulated as p from pg_matviews where matviewname = ${view}`.execute(db);
+    const populated = await sql<{
+      p: boolean;
+    }>`select ispopulated as p from pg_matviews where matviewname = ${view}`.execute(db);
     const conc = c && populated.rows[0]?.p ? sql.raw(" concurrently") : sql.raw("");
     await sql`refresh materialized view${conc} ${sql.table(view)}`.execute(db);
     took[view] = (performance.now() - started) / 1000;

@@ -16,7 +16,12 @@ interface CitationRow {
  * articles that enter dashboards (done, licensed) take part, so a trail never runs through a
  * half-mined article. `articleIds` null means every article.
  */
-async function practiceStatements(db: DB, practiceId: string, articleIds: readonly string[] | null, statementId?: string): Promise<CitationRow[]> {
+async function practiceStatements(
+  db: DB,
+  practiceId: string,
+  articleIds: readonly string[] | null,
+  statementId?: string,
+): Promise<CitationRow[]> {
   const r = await sql<CitationRow>`
     select s.id as statement_id, s.article_id, c.id as citation_id, r.work_id, c.locator, c.secondary
     from statement_practices sp
@@ -41,7 +46,12 @@ function group(rows: CitationRow[]): TrailStart[] {
       out.set(row.statement_id, s);
     }
     if (row.citation_id) {
-      s.citations.push({ citationId: row.citation_id, workId: row.work_id, locator: row.locator, secondary: !!row.secondary });
+      s.citations.push({
+        citationId: row.citation_id,
+        workId: row.work_id,
+        locator: row.locator,
+        secondary: !!row.secondary,
+      });
     }
   }
   return [...out.values()];

@@ -11,7 +11,11 @@ function supportedBy(s: TrailSummary, checks: Map<string, SourceCheckVerdict>): 
 }
 
 async function checksOf(db: DB, practiceId: string): Promise<Map<string, SourceCheckVerdict>> {
-  const rows = await db.selectFrom("source_checks").select(["work_id", "verdict"]).where("practice_id", "=", practiceId).execute();
+  const rows = await db
+    .selectFrom("source_checks")
+    .select(["work_id", "verdict"])
+    .where("practice_id", "=", practiceId)
+    .execute();
   return new Map(rows.map((r) => [r.work_id, r.verdict]));
 }
 

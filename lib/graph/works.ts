@@ -22,11 +22,18 @@ export async function typeWorks(db: Handle, workIds?: readonly string[]): Promis
     where a.id = w.article_id and w.type_decided_by <> 'curator' ${only}`.execute(db);
   await sql`
     update works w set work_type = 'methods_source', type_decided_by = 'reference_kind'
-    where w.article_id is null and w.kind = 'book' and w.type_decided_by in ('default','reference_kind') ${only}`.execute(db);
+    where w.article_id is null and w.kind = 'book' and w.type_decided_by in ('default','reference_kind') ${only}`.execute(
+    db,
+  );
 }
 
 export async function setWorkType(db: DB, workId: string, type: WorkType): Promise<void> {
-  const r = await db.updateTable("works").set({ work_type: type, type_decided_by: "curator" }).where("id", "=", workId).where("merged_into", "is", null).executeTakeFirst();
+  const r = await db
+    .updateTable("works")
+    .set({ work_type: type, type_decided_by: "curator" })
+    .where("id", "=", workId)
+    .where("merged_into", "is", null)
+    .executeTakeFirst();
   if (Number(r.numUpdatedRows) === 0) throw new HttpError(404, "not_found", "That work was not found.");
 }
 
@@ -38,19 +45,43 @@ export async function setWorkType(db: DB, workId: string, type: WorkType): Promi
 export async function mergeWorks(db: DB, fromId: string, intoId: string): Promise<void> {
   if (fromId === intoId) throw new HttpError(400, "invalid", "Pick two different works to merge.", "intoId");
   await db.transaction().execute(async (trx) => {
-    const both = await trx.selectFrom("works").selectAll().where("id", "in", [fromId, intoId]).where("merged_into", "is", null).forUpdate().execute();
+    const both = await trx
+      .selectFrom("works")
+      .selectAll()
+      .where("id", "in", [fromId, intoId])
+      .where("merged_into", "is", null)
+      .forUpdate()
+      .execute();
     const from = both.find((w) => w.id === fromId);
     const into = both.find((w) => w.id === intoId);
-    if (!from || !into) throw new HttpError(404, "not_found", "One of the two works was not found (or is already merged).");
+    if (!from || !into)
+      throw new HttpError(404, "not_found", "One of the two works was not found (or is already merged).");
     if (from.article_id && into.article_id) {
-      throw new HttpError(409, "conflict", "Both works are articles of the corpus; two articles cannot be one work. Fix the article metadata instead.", "intoId");
+      throw new HttpError(
+        409,
+        "conflict",
+        "Both works are articles of the corpus; two articles cannot be one work. Fix the article metadata instead.",
+        "intoId",
+      );
     }
-    await trx.updateTable("references").set({ work_id: intoId, work_set_by: "curator" }).where("work_id", "=", fromId).execute();
+    await trx
+      .updateTable("references")
+      .set({ work_id: intoId, work_set_by: "curator" })
+      .where("work_id", "=", fromId)
+      .execute();
     // The DOI index is unique among unmerged works: free it before the kept work takes it.
-    await trx.updateTable("works").set({ merged_into: intoId, article_id: null, doi: null }).where("id", "=", fromId).execute();
     await trx
       .updateTable("works")
-      .set({ article_id: into.article_id ?? from.article_id, doi: into.doi ?? from.doi, title: into.title ?? from.title })
+      .set({ merged_into: intoId, article_id: null, doi: null })
+      .where("id", "=", fromId)
+      .execute();
+    await trx
+      .updateTable("works")
+      .set({
+        article_id: into.article_id ?? from.article_id,
+        doi: into.doi ?? from.doi,
+        title: into.title ?? from.title,
+      })
       .where("id", "=", intoId)
       .execute();
     await sql`update source_checks set work_id = ${intoId} where work_id = ${fromId}
@@ -67,14 +98,27 @@ export async function mergeWorks(db: DB, fromId: string, intoId: string): Promis
  * re-resolution does not score them back onto the work they were split from.
  */
 export async function splitWork(db: DB, workId: string, referenceIds: readonly string[]): Promise<string> {
-  if (referenceIds.length === 0) throw new HttpError(400, "invalid", "Choose at least one reference to split off.", "referenceIds");
+  if (referenceIds.length === 0)
+    throw new HttpError(400, "invalid", "Choose at least one reference to split off.", "referenceIds");
   return db.transaction().execute(async (trx) => {
-    const refs = await trx.selectFrom("references").selectAll().where("work_id", "=", workId).where("id", "in", [...referenceIds]).execute();
-    if (refs.length !== referenceIds.length) throw new HttpError(400, "invalid", "Some of those references do not belong to this work.", "referenceIds");
+    const refs = await trx
+      .selectFrom("references")
+      .selectAll()
+      .where("work_id", "=", workId)
+      .where("id", "in", [...referenceIds])
+      .execute();
+    if (refs.length !== referenceIds.length)
+      throw new HttpError(400, "invalid", "Some of those references do not belong to this work.", "referenceIds");
     // An outside work is nothing but its references; one of our articles stays a work without them.
     const work = await trx.selectFrom("works").select("article_id").where("id", "=", workId).executeTakeFirstOrThrow();
-    const left = await trx.selectFrom("references").select(sql<number>`count(*)`.as("n")).where("work_id", "=", workId).where("id", "not in", [...referenceIds]).executeTakeFirstOrThrow();
-    if (Number(left.n) === 0 && !work.article_id) throw new HttpError(400, "invalid", "Leave at least one reference on the original work.", "referenceIds");
+    const left = await trx
+      .selectFrom("references")
+      .select(sql<number>`count(*)`.as("n"))
+      .where("work_id", "=", workId)
+      .where("id", "not in", [...referenceIds])
+      .executeTakeFirstOrThrow();
+    if (Number(left.n) === 0 && !work.article_id)
+      throw new HttpError(400, "invalid", "Leave at least one reference on the original work.", "referenceIds");
     const first = refs[0];
     const w = await trx
       .insertInto("works")
@@ -90,7 +134,11 @@ export async function splitWork(db: DB, workId: string, referenceIds: readonly s
       })
       .returning("id")
       .executeTakeFirstOrThrow();
-    await trx.updateTable("references").set({ work_id: w.id, work_set_by: "curator" }).where("id", "in", [...referenceIds]).execute();
+    await trx
+      .updateTable("references")
+      .set({ work_id: w.id, work_set_by: "curator" })
+      .where("id", "in", [...referenceIds])
+      .execute();
     await typeWorks(trx, [w.id]);
     return w.id;
   });

@@ -1,6 +1,11 @@
 /** Browser-side fetch for react-query: throws an Error carrying the server's {error:{code,message,field}}. */
 export class ApiError extends Error {
-  constructor(public status: number, public code: string, message: string, public field?: string) {
+  constructor(
+    public status: number,
+    public code: string,
+    message: string,
+    public field?: string,
+  ) {
     super(message);
   }
 }

@@ -20,7 +20,14 @@ const DocumentMeta = z
   })
   .passthrough();
 
-type Current = { title: string | null; authors: string[]; year: number | null; doi: string | null; licence: string | null; venue_id: string | null };
+type Current = {
+  title: string | null;
+  authors: string[];
+  year: number | null;
+  doi: string | null;
+  licence: string | null;
+  venue_id: string | null;
+};
 
 export async function documentMetaUpdate(trx: Transaction<Database>, current: Current, raw: unknown) {
   const parsed = DocumentMeta.safeParse(raw ?? {});
@@ -39,18 +46,32 @@ export async function documentMetaUpdate(trx: Transaction<Database>, current: Cu
   };
   const title = meta.title?.replace(/\s+/g, " ").trim();
   if (!current.title && title) out.title = title.slice(0, 1000);
-  if (current.authors.length === 0 && meta.authors?.length) out.authors = JSON.stringify(meta.authors.map((a) => a.trim()).filter(Boolean).slice(0, 200));
+  if (current.authors.length === 0 && meta.authors?.length)
+    out.authors = JSON.stringify(
+      meta.authors
+        .map((a) => a.trim())
+        .filter(Boolean)
+        .slice(0, 200),
+    );
   const year = meta.year == null ? null : Number(String(meta.year).match(/\b(1[89]\d\d|20\d\d)\b/)?.[1]);
   if (current.year == null && year && year >= 1800 && year <= 2100) out.year = year;
   const doi = normaliseDoi(meta.doi);
   if (!current.doi && doi) {
     // Another article may already carry this DOI (unique); then the document's claim is ignored.
-    const taken = await trx.selectFrom("articles").select("id").where((eb) => eb(eb.fn("lower", ["doi"]), "=", doi.toLowerCase())).executeTakeFirst();
+    const taken = await trx
+      .selectFrom("articles")
+      .select("id")
+      .where((eb) => eb(eb.fn("lower", ["doi"]), "=", doi.toLowerCase()))
+      .executeTakeFirst();
     if (!taken) out.doi = doi;
   }
   if (!current.licence && meta.licence?.trim()) out.licence = meta.licence.trim().slice(0, 500);
   if (!current.venue_id && meta.venue?.trim()) {
-    const v = await trx.selectFrom("venues").select("id").where((eb) => eb(eb.fn("lower", ["name"]), "=", meta.venue!.trim().toLowerCase())).executeTakeFirst();
+    const v = await trx
+      .selectFrom("venues")
+      .select("id")
+      .where((eb) => eb(eb.fn("lower", ["name"]), "=", meta.venue!.trim().toLowerCase()))
+      .executeTakeFirst();
     if (v) out.venue_id = v.id;
   }
   return out;

@@ -80,18 +80,30 @@ async function parseCitationJs(text: string, format: "bibtex" | "ris"): Promise<
   try {
     csl = (await Cite.async(text)).data as Csl[];
   } catch (err) {
-    throw new MetadataError(`The ${format === "bibtex" ? "BibTeX" : "RIS"} file could not be read: ${(err as Error).message}`);
+    throw new MetadataError(
+      `The ${format === "bibtex" ? "BibTeX" : "RIS"} file could not be read: ${(err as Error).message}`,
+    );
   }
   // CSL has no field for attached files, and citation-js drops `copyright`; those two come from the
   // raw records of the same parse, which are in the same order.
   let raw: RawExtras[] = [];
   try {
     if (format === "bibtex") {
-      const entries = plugins.input.chain(text, { target: "@biblatex/entries+list" }) as { properties: Record<string, string> }[];
-      raw = entries.map((e) => ({ files: basenames(e.properties.file), licence: clean(e.properties.copyright ?? e.properties.license ?? e.properties.licence), year: yearOf(e.properties.year ?? e.properties.date) }));
+      const entries = plugins.input.chain(text, { target: "@biblatex/entries+list" }) as {
+        properties: Record<string, string>;
+      }[];
+      raw = entries.map((e) => ({
+        files: basenames(e.properties.file),
+        licence: clean(e.properties.copyright ?? e.properties.license ?? e.properties.licence),
+        year: yearOf(e.properties.year ?? e.properties.date),
+      }));
     } else {
       const records = plugins.input.chain(text, { target: "@else/list+object" }) as Record<string, unknown>[];
-      raw = records.map((r) => ({ files: basenames(r.L1 ?? r.L4), licence: clean(Array.isArray(r.C5) ? r.C5[0] : r.C5), year: yearOf(r.PY ?? r.Y1 ?? r.DA) }));
+      raw = records.map((r) => ({
+        files: basenames(r.L1 ?? r.L4),
+        licence: clean(Array.isArray(r.C5) ? r.C5[0] : r.C5),
+        year: yearOf(r.PY ?? r.Y1 ?? r.DA),
+      }));
     }
   } catch {
     raw = [];
@@ -101,12 +113,26 @@ async function parseCitationJs(text: string, format: "bibtex" | "ris"): Promise<
     warnings.push("File names and licences could not be read from this file; entries match by DOI only.");
     raw = [];
   }
-  return { format, entries: csl.map((c, i) => fromCsl(c, raw[i] ?? { files: [], licence: null, year: null })), warnings };
+  return {
+    format,
+    entries: csl.map((c, i) => fromCsl(c, raw[i] ?? { files: [], licence: null, year: null })),
+    warnings,
+  };
 }
 
 const CSV_COLUMNS: Record<string, keyof MetadataEntry> = {
-  doi: "doi", title: "title", authors: "authors", author: "authors", year: "year", venue: "venue", journal: "venue",
-  licence: "licence", license: "licence", file: "files", filename: "files", file_name: "files",
+  doi: "doi",
+  title: "title",
+  authors: "authors",
+  author: "authors",
+  year: "year",
+  venue: "venue",
+  journal: "venue",
+  licence: "licence",
+  license: "licence",
+  file: "files",
+  filename: "files",
+  file_name: "files",
 };
 
 function parseCsv(text: string): ParsedMetadata {
@@ -118,16 +144,25 @@ function parseCsv(text: string): ParsedMetadata {
   const fields = r.meta.fields ?? [];
   const known = fields.filter((f) => f in CSV_COLUMNS);
   if (!known.includes("doi") && !known.some((f) => CSV_COLUMNS[f] === "files")) {
-    throw new MetadataError(`The CSV needs a "doi" or "file" column to match rows to files; its columns are: ${fields.join(", ") || "(none)"}.`);
+    throw new MetadataError(
+      `The CSV needs a "doi" or "file" column to match rows to files; its columns are: ${fields.join(", ") || "(none)"}.`,
+    );
   }
   const warnings = r.errors.slice(0, 5).map((e) => `CSV row ${(e.row ?? 0) + 2}: ${e.message}`);
   const entries = r.data.map((row) => {
-    const get = (k: keyof MetadataEntry) => fields.filter((f) => CSV_COLUMNS[f] === k).map((f) => row[f]).find((v) => v && v.trim());
+    const get = (k: keyof MetadataEntry) =>
+      fields
+        .filter((f) => CSV_COLUMNS[f] === k)
+        .map((f) => row[f])
+        .find((v) => v && v.trim());
     return {
       doi: normaliseDoi(get("doi")),
       title: clean(get("title")),
       // Several authors in one cell are separated by semicolons (commas separate family and given name).
-      authors: (get("authors") ?? "").split(";").map((a) => a.trim()).filter(Boolean),
+      authors: (get("authors") ?? "")
+        .split(";")
+        .map((a) => a.trim())
+        .filter(Boolean),
       year: yearOf(get("year")),
       venue: clean(get("venue")),
       licence: clean(get("licence")),
@@ -143,10 +178,17 @@ export async function parseMetadata(text: string): Promise<ParsedMetadata> {
   return format === "csv" ? parseCsv(text) : parseCitationJs(text, format);
 }
 
-const stem = (f: string) => f.trim().toLowerCase().replace(/\.[a-z0-9]{2,5}$/i, "");
+const stem = (f: string) =>
+  f
+    .trim()
+    .toLowerCase()
+    .replace(/\.[a-z0-9]{2,5}$/i, "");
 
 /** The entry for one uploaded file: same DOI (when the file's DOI is known), else same file name or stem. */
-export function matchEntry(entries: MetadataEntry[], file: { filename: string; doi?: string | null }): MetadataEntry | null {
+export function matchEntry(
+  entries: MetadataEntry[],
+  file: { filename: string; doi?: string | null },
+): MetadataEntry | null {
   const doi = normaliseDoi(file.doi);
   if (doi) {
     const byDoi = entries.find((e) => e.doi && e.doi.toLowerCase() === doi.toLowerCase());

@@ -9,17 +9,62 @@ const AUTHORS = String.raw`${SURNAME}(?:\s+et\s+al\.?|(?:,\s*${SURNAME})*,?\s*(?
 const YEAR = String.raw`(?:1[6-9]\d{2}|20\d{2})[a-z]?|n\.d\.|in press|forthcoming`;
 const LOCATOR = String.raw`(?:pp?\.|pages?|chaps?\.|chapters?|ch\.|secs?\.|sections?|§|paras?\.|paragraphs?|¶|fig\.|figs?\.|tables?|notes?|n\.|vols?\.|ll?\.|lines?)\s*[\dA-Za-z]+(?:\.\d+)*(?:\s*[-–—]\s*[\dA-Za-z]+(?:\.\d+)*)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?)*`;
 
-const partRe = new RegExp(String.raw`^(?:(?:see|e\.g\.|cf\.|see also|also|for example|for a review, see)[,\s]+)?(${AUTHORS}),?\s+((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?$`, "u");
-const yearsLocatorRe = new RegExp(String.raw`^((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?(?:\s*;\s*(.*))?$`, "u");
+const partRe = new RegExp(
+  String.raw`^(?:(?:see|e\.g\.|cf\.|see also|also|for example|for a review, see)[,\s]+)?(${AUTHORS}),?\s+((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?$`,
+  "u",
+);
+const yearsLocatorRe = new RegExp(
+  String.raw`^((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?(?:\s*;\s*(.*))?$`,
+  "u",
+);
 const narrativeRe = new RegExp(String.raw`(${AUTHORS})\s+\(([^()]*)\)`, "gu");
 const notNames = new Set([
-  "Table", "Tables", "Figure", "Figures", "Fig", "Study", "Studies", "Wave", "Sample", "Model", "Appendix", "Section",
-  "Experiment", "Phase", "Time", "Grade", "Year", "In", "The", "Since", "During", "From", "Until", "After", "Before",
-  "Version", "Step", "Stage", "Chapter", "Part", "Item", "Items", "Scale", "Round", "Trial", "Cohort", "Survey",
+  "Table",
+  "Tables",
+  "Figure",
+  "Figures",
+  "Fig",
+  "Study",
+  "Studies",
+  "Wave",
+  "Sample",
+  "Model",
+  "Appendix",
+  "Section",
+  "Experiment",
+  "Phase",
+  "Time",
+  "Grade",
+  "Year",
+  "In",
+  "The",
+  "Since",
+  "During",
+  "From",
+  "Until",
+  "After",
+  "Before",
+  "Version",
+  "Step",
+  "Stage",
+  "Chapter",
+  "Part",
+  "Item",
+  "Items",
+  "Scale",
+  "Round",
+  "Trial",
+  "Cohort",
+  "Survey",
 ]);
 
 function normAuthors(a: string): string {
-  const t = a.replace(/\s+/g, " ").trim().replace(/\s+and\s+/g, " & ").replace(/,\s*&/g, " &").replace(/\bet al(?!\.)/, "et al.");
+  const t = a
+    .replace(/\s+/g, " ")
+    .trim()
+    .replace(/\s+and\s+/g, " & ")
+    .replace(/,\s*&/g, " &")
+    .replace(/\bet al(?!\.)/, "et al.");
   return t;
 }
 
@@ -38,7 +83,11 @@ function parsePart(part: string): FoundCitation[] {
     const citing = parsePart(ci[2]);
     if (original.length && citing.length) {
       return [
-        ...original.map((o) => ({ ...o, secondary: true, citedIn: { authors: citing[0].authors, year: citing[0].year } })),
+        ...original.map((o) => ({
+          ...o,
+          secondary: true,
+          citedIn: { authors: citing[0].authors, year: citing[0].year },
+        })),
         ...citing,
       ];
     }
@@ -65,7 +114,14 @@ function parseParenthetical(inner: string): FoundCitation[] {
 }
 
 function authorsFromReference(ref: Reference): string {
-  const surnames = ref.authors.map((a) => a.replace(/,.*$/, "").replace(/^(?:\p{Lu}\.\s*)+/u, "").trim()).filter(Boolean);
+  const surnames = ref.authors
+    .map((a) =>
+      a
+        .replace(/,.*$/, "")
+        .replace(/^(?:\p{Lu}\.\s*)+/u, "")
+        .trim(),
+    )
+    .filter(Boolean);
   if (surnames.length === 0) return ref.title ?? ref.raw.slice(0, 40);
   if (surnames.length === 1) return surnames[0];
   if (surnames.length === 2) return `${surnames[0]} & ${surnames[1]}`;
@@ -85,7 +141,10 @@ function expandNumbers(spec: string): number[] {
   return nums;
 }
 
-const numberedRe = new RegExp(String.raw`\[(\d+(?:\s*[-–—,]\s*\d+)*)(?:\s*,\s*(${LOCATOR}))?\](?:\s*[-–—]\s*\[(\d+)\])?`, "giu");
+const numberedRe = new RegExp(
+  String.raw`\[(\d+(?:\s*[-–—,]\s*\d+)*)(?:\s*,\s*(${LOCATOR}))?\](?:\s*[-–—]\s*\[(\d+)\])?`,
+  "giu",
+);
 
 /** All in-text citations of one sentence, in order of appearance. */
 export function findCitations(sentence: string, numbered: Map<number, Reference>): FoundCitation[] {

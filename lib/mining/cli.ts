@@ -20,7 +20,13 @@ async function main(files: string[]): Promise<number> {
       else line = (await miner.mine({ data: new Uint8Array(await readFile(file)), filename: file })).line;
     } catch (err) {
       const code = (err as NodeJS.ErrnoException).code;
-      line = { file, error: { code: "not_found", message: code === "ENOENT" ? `No such file: ${file}` : `Cannot read ${file}: ${String(err)}` } };
+      line = {
+        file,
+        error: {
+          code: "not_found",
+          message: code === "ENOENT" ? `No such file: ${file}` : `Cannot read ${file}: ${String(err)}`,
+        },
+      };
     }
     const checked = ContractLine.parse(line);
     if (isErrorLine(checked)) failed = true;

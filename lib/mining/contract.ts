@@ -3,9 +3,28 @@
 import { z } from "zod";
 
 export const statisticKeys = [
-  "cronbach_alpha", "mcdonald_omega", "composite_reliability", "ave", "factor_loading", "htmt", "vif",
-  "cfi", "tli", "rmsea", "srmr", "chi_square_df", "kmo", "eigenvalue", "icc", "cohen_kappa", "p_value",
-  "r_squared", "item_total_correlation", "sample_size_ratio", "statistical_power", "other",
+  "cronbach_alpha",
+  "mcdonald_omega",
+  "composite_reliability",
+  "ave",
+  "factor_loading",
+  "htmt",
+  "vif",
+  "cfi",
+  "tli",
+  "rmsea",
+  "srmr",
+  "chi_square_df",
+  "kmo",
+  "eigenvalue",
+  "icc",
+  "cohen_kappa",
+  "p_value",
+  "r_squared",
+  "item_total_correlation",
+  "sample_size_ratio",
+  "statistical_power",
+  "other",
 ] as const;
 export const StatisticKey = z.enum(statisticKeys);
 export type StatisticKey = z.infer<typeof StatisticKey>;
@@ -54,7 +73,10 @@ export const Reference = z.object({
   year: z.string().nullable(),
   title: z.string().nullable(),
   container: z.string().nullable(),
-  doi: z.string().regex(/^10\.\S+$/).nullable(),
+  doi: z
+    .string()
+    .regex(/^10\.\S+$/)
+    .nullable(),
   kind: z.enum(["book", "chapter", "article", "other"]),
   number: z.number().int().positive().nullable().optional(),
 });
@@ -70,8 +92,19 @@ export const SuccessLine = z.object({
 export type SuccessLine = z.infer<typeof SuccessLine>;
 
 export const errorCodes = [
-  "not_pdf", "unsupported_type", "encrypted", "no_text_layer", "corrupt", "too_large", "zero_pages",
-  "too_many_pages", "not_jats", "empty", "timeout", "not_found", "internal",
+  "not_pdf",
+  "unsupported_type",
+  "encrypted",
+  "no_text_layer",
+  "corrupt",
+  "too_large",
+  "zero_pages",
+  "too_many_pages",
+  "not_jats",
+  "empty",
+  "timeout",
+  "not_found",
+  "internal",
 ] as const;
 export const ErrorCode = z.enum(errorCodes);
 export type ErrorCode = z.infer<typeof ErrorCode>;

@@ -2,7 +2,13 @@
 import type { PDFParse } from "pdf-parse";
 import { findCitations, stripCitations } from "./citations";
 import {
-  ContractLine, type DocumentCitation, type ErrorCode, type ErrorLine, type Reference, type Section, type Statement,
+  ContractLine,
+  type DocumentCitation,
+  type ErrorCode,
+  type ErrorLine,
+  type Reference,
+  type Section,
+  type Statement,
   SuccessLine,
 } from "./contract";
 import { checkJats, looksLikeXml, parseJats } from "./jats";
@@ -29,8 +35,16 @@ export type ArticleMeta = {
   firstPageText: string | null;
 };
 export type MineOutput = { line: ContractLine; timings: { readMs: number; mineMs: number }; meta: ArticleMeta };
-export type MinerOptions = { procedures?: ProcedurePattern[]; maxPages?: number; maxBytes?: number; timeoutMs?: number };
-export type Miner = { mine(input: { data: Uint8Array; filename: string }): Promise<MineOutput>; close(): Promise<void> };
+export type MinerOptions = {
+  procedures?: ProcedurePattern[];
+  maxPages?: number;
+  maxBytes?: number;
+  timeoutMs?: number;
+};
+export type Miner = {
+  mine(input: { data: Uint8Array; filename: string }): Promise<MineOutput>;
+  close(): Promise<void>;
+};
 export type MineTextOptions = { procedures?: ProcedurePattern[]; file?: string };
 export type MinedDocument = Omit<SuccessLine, "file">;
 
@@ -38,10 +52,21 @@ export const DEFAULT_MAX_BYTES = 50 * 1024 * 1024;
 export const DEFAULT_MAX_PAGES = 2000;
 export const DEFAULT_TIMEOUT_MS = 60_000;
 
-const emptyMeta = (): ArticleMeta => ({ title: null, authors: [], year: null, doi: null, venue: null, licence: null, firstPageText: null });
+const emptyMeta = (): ArticleMeta => ({
+  title: null,
+  authors: [],
+  year: null,
+  doi: null,
+  venue: null,
+  licence: null,
+  firstPageText: null,
+});
 
 class MineError extends Error {
-  constructor(readonly code: ErrorCode, message: string) {
+  constructor(
+    readonly code: ErrorCode,
+    message: string,
+  ) {
     super(message);
   }
 }
@@ -79,10 +104,18 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
       const prev = current.chunks.at(-1)?.text.trimEnd() ?? "";
       if (h && (!prev || /[.!?:)"”]$/.test(prev) || /\n\s*$/.test(current.chunks.at(-1)?.text ?? "\n"))) {
         if (h.section) {
-          if (h.level === 1 || ["results", "discussion", "introduction"].includes(h.section) || topSection === "unknown" || topSection === "other") {
+          if (
+            h.level === 1 ||
+            ["results", "discussion", "introduction"].includes(h.section) ||
+            topSection === "unknown" ||
+            topSection === "other"
+          ) {
             topSection = h.section;
           }
-          section = h.section === "methods" && ["results", "discussion"].includes(topSection) && h.level > 1 ? topSection : h.section;
+          section =
+            h.section === "methods" && ["results", "discussion"].includes(topSection) && h.level > 1
+              ? topSection
+              : h.section;
           if (h.level === 1) topSection = h.section;
         } else if (h.level > 1 || (section !== "unknown" && section !== "other" && !/^\d/.test(t))) {
           section = topSection === "unknown" ? "other" : section;
@@ -127,7 +160,11 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
       for (const c of cites) citations.push({ ...c, page, sentence });
       const stripped = stripCitations(sentence);
       let last: ReturnType<typeof lastStatistic> = null;
-      const found = extractStatements(stripped, matchProcedure, { hasCitation: cites.length > 0, previousStatistic, onLastStatistic: (k) => (last = k) });
+      const found = extractStatements(stripped, matchProcedure, {
+        hasCitation: cites.length > 0,
+        previousStatistic,
+        onLastStatistic: (k) => (last = k),
+      });
       previousStatistic = last ?? previousStatistic;
       for (const st of found) {
         statements.push({ page, section: block.section, sentence, ...st, citations: cites });
@@ -145,9 +182,15 @@ export function mineText(text: string, opts: MineTextOptions = {}): MinedDocumen
 }
 
 function metaFromText(firstPage: string): Partial<ArticleMeta> {
-  const lines = firstPage.split("\n").map((l) => l.trim()).filter(Boolean);
+  const lines = firstPage
+    .split("\n")
+    .map((l) => l.trim())
+    .filter(Boolean);
   const year = /\b(19[5-9]\d|20\d{2})\b/.exec(lines.slice(0, 8).join(" "))?.[1] ?? null;
-  const licence = /https?:\/\/creativecommons\.org\/[^\s)]+/i.exec(firstPage)?.[0] ?? (/\bCC[- ]BY(?:[- ](?:NC|SA|ND))*(?:[- ]\d\.\d)?\b/.exec(firstPage)?.[0] ?? null);
+  const licence =
+    /https?:\/\/creativecommons\.org\/[^\s)]+/i.exec(firstPage)?.[0] ??
+    /\bCC[- ]BY(?:[- ](?:NC|SA|ND))*(?:[- ]\d\.\d)?\b/.exec(firstPage)?.[0] ??
+    null;
   return { title: lines[0] ?? null, year, doi: normaliseDoi(firstPage), licence, firstPageText: firstPage };
 }
 
@@ -163,7 +206,12 @@ function withTimeout<T>(p: Promise<T>, ms: number, onTimeout: () => void): Promi
     new Promise<T>((_r, reject) => {
       timer = setTimeout(() => {
         onTimeout();
-        reject(new MineError("timeout", `Mining took longer than ${Math.round(ms / 1000)} s and was stopped; the file may be damaged or unusually complex.`));
+        reject(
+          new MineError(
+            "timeout",
+            `Mining took longer than ${Math.round(ms / 1000)} s and was stopped; the file may be damaged or unusually complex.`,
+          ),
+        );
       }, ms);
       timer.unref?.();
     }),
@@ -175,7 +223,10 @@ function classifyPdfError(err: unknown): MineError {
   const name = err instanceof Error ? err.name : "";
   const msg = err instanceof Error ? err.message : String(err);
   if (name === "PasswordException" || /password/i.test(msg)) {
-    return new MineError("encrypted", "The PDF is encrypted (password protected); remove the protection before uploading it.");
+    return new MineError(
+      "encrypted",
+      "The PDF is encrypted (password protected); remove the protection before uploading it.",
+    );
   }
   return new MineError("corrupt", `The PDF could not be read; it looks truncated or damaged (${msg.slice(0, 200)}).`);
 }
@@ -205,7 +256,8 @@ function loadedDocument(parser: PDFParse): PdfDocument | null {
   return typeof d.getPage === "function" && typeof d.numPages === "number" ? (d as PdfDocument) : null;
 }
 
-const isPositioned = (it: PositionedItem | { type: string }): it is PositionedItem => "str" in it && Array.isArray((it as PositionedItem).transform);
+const isPositioned = (it: PositionedItem | { type: string }): it is PositionedItem =>
+  "str" in it && Array.isArray((it as PositionedItem).transform);
 
 /** Page texts in reading order (see layout.ts); the geometry cost is reported separately. */
 async function pageTexts(parser: PDFParse, total: number): Promise<{ pages: string[]; layoutMs: number }> {
@@ -236,12 +288,23 @@ async function pageTexts(parser: PDFParse, total: number): Promise<{ pages: stri
  * The page texts of a PDF in reading order, as the miner reads them before text repair. `layoutMs` is
  * the time spent on the geometry alone. Throws on unreadable PDFs (use createMiner for error lines).
  */
-export async function extractPdfPages(data: Uint8Array, opts: { maxPages?: number; timeoutMs?: number } = {}): Promise<{ pages: string[]; layoutMs: number }> {
-  const { pages, layoutMs } = await readPdf(data, opts.maxPages ?? DEFAULT_MAX_PAGES, opts.timeoutMs ?? DEFAULT_TIMEOUT_MS);
+export async function extractPdfPages(
+  data: Uint8Array,
+  opts: { maxPages?: number; timeoutMs?: number } = {},
+): Promise<{ pages: string[]; layoutMs: number }> {
+  const { pages, layoutMs } = await readPdf(
+    data,
+    opts.maxPages ?? DEFAULT_MAX_PAGES,
+    opts.timeoutMs ?? DEFAULT_TIMEOUT_MS,
+  );
   return { pages, layoutMs };
 }
 
-async function readPdf(data: Uint8Array, maxPages: number, timeoutMs: number): Promise<{ pages: string[]; info: Record<string, unknown>; layoutMs: number }> {
+async function readPdf(
+  data: Uint8Array,
+  maxPages: number,
+  timeoutMs: number,
+): Promise<{ pages: string[]; info: Record<string, unknown>; layoutMs: number }> {
   // Loading pdf.js (first document only) is not the document's time.
   const { PDFParse } = await loadPdfParse();
   // pdf.js takes ownership of (and may detach) the buffer it is given, so it gets a copy.
@@ -253,7 +316,8 @@ async function readPdf(data: Uint8Array, maxPages: number, timeoutMs: number): P
   const work = (async () => {
     const info = await parser.getInfo();
     if (info.total === 0) throw new MineError("zero_pages", "The PDF has no pages.");
-    if (info.total > maxPages) throw new MineError("too_many_pages", `The PDF has ${info.total} pages; the limit is ${maxPages}.`);
+    if (info.total > maxPages)
+      throw new MineError("too_many_pages", `The PDF has ${info.total} pages; the limit is ${maxPages}.`);
     const { pages, layoutMs } = await pageTexts(parser, info.total);
     const raw: unknown = info.info;
     const infoDict = raw && typeof raw === "object" ? (raw as Record<string, unknown>) : {};
@@ -296,7 +360,11 @@ export function createMiner(options: MinerOptions = {}): Miner {
     const data = input.data;
     try {
       if (data.byteLength > maxBytes) {
-        return errorOutput(file, "too_large", `The file is ${(data.byteLength / 1048576).toFixed(1)} MB; the limit is ${(maxBytes / 1048576).toFixed(0)} MB.`);
+        return errorOutput(
+          file,
+          "too_large",
+          `The file is ${(data.byteLength / 1048576).toFixed(1)} MB; the limit is ${(maxBytes / 1048576).toFixed(0)} MB.`,
+        );
       }
       if (data.byteLength === 0) return errorOutput(file, "empty", "The file is empty.");
       const head = new TextDecoder("latin1").decode(data.subarray(0, 1024));
@@ -306,22 +374,32 @@ export function createMiner(options: MinerOptions = {}): Miner {
         const pages = repairPages(rawPages);
         const chars = pages.join("").replace(/\s/g, "").length;
         if (chars < Math.max(20, pages.length * 5)) {
-          return errorOutput(file, "no_text_layer", `The PDF's ${pages.length} page(s) carry (almost) no text layer; it looks scanned and needs OCR before it can be mined.`, t1 - t0);
+          return errorOutput(
+            file,
+            "no_text_layer",
+            `The PDF's ${pages.length} page(s) carry (almost) no text layer; it looks scanned and needs OCR before it can be mined.`,
+            t1 - t0,
+          );
         }
         const doc = minePages(pages, { procedures });
         const line = SuccessLine.parse({ file, ...doc });
         const fromText = metaFromText(pages[0] ?? "");
-        const str = (k: string) => (typeof info[k] === "string" && (info[k] as string).trim() ? (info[k] as string).trim() : null);
+        const str = (k: string) =>
+          typeof info[k] === "string" && (info[k] as string).trim() ? (info[k] as string).trim() : null;
         const meta: ArticleMeta = {
           ...emptyMeta(),
           ...fromText,
           title: str("Title") ?? fromText.title ?? null,
-          authors: str("Author")?.split(/\s*(?:;|,| and |&)\s*/).filter(Boolean) ?? [],
+          authors:
+            str("Author")
+              ?.split(/\s*(?:;|,| and |&)\s*/)
+              .filter(Boolean) ?? [],
         };
         return { line, timings: { readMs: t1 - t0, mineMs: performance.now() - t1 }, meta };
       }
       const text = decodeUtf8(data);
-      if (text === null) return errorOutput(file, "not_pdf", "The file is neither a PDF, JATS XML nor UTF-8 text; it cannot be mined.");
+      if (text === null)
+        return errorOutput(file, "not_pdf", "The file is neither a PDF, JATS XML nor UTF-8 text; it cannot be mined.");
       if (!text.trim()) return errorOutput(file, "empty", "The file contains no text.");
       if (looksLikeXml(text.slice(0, 200))) {
         const check = checkJats(text);
@@ -330,15 +408,26 @@ export function createMiner(options: MinerOptions = {}): Miner {
         const t1 = performance.now();
         const doc = minePages([jats.lines.join("\n")], { procedures, referenceLines: jats.referenceLines });
         const line = SuccessLine.parse({ file, ...doc });
-        return { line, timings: { readMs: t1 - t0, mineMs: performance.now() - t1 }, meta: { ...jats.meta, firstPageText: null } };
+        return {
+          line,
+          timings: { readMs: t1 - t0, mineMs: performance.now() - t1 },
+          meta: { ...jats.meta, firstPageText: null },
+        };
       }
       const t1 = performance.now();
       const doc = mineText(text, { procedures });
       const line = SuccessLine.parse({ file, ...doc });
       const fromText = metaFromText(text.split("\f")[0]);
-      return { line, timings: { readMs: t1 - t0, mineMs: performance.now() - t1 }, meta: { ...emptyMeta(), ...fromText, firstPageText: null } };
+      return {
+        line,
+        timings: { readMs: t1 - t0, mineMs: performance.now() - t1 },
+        meta: { ...emptyMeta(), ...fromText, firstPageText: null },
+      };
     } catch (err) {
-      const e = err instanceof MineError ? err : new MineError("internal", `Unexpected miner failure: ${err instanceof Error ? err.message : String(err)}`);
+      const e =
+        err instanceof MineError
+          ? err
+          : new MineError("internal", `Unexpected miner failure: ${err instanceof Error ? err.message : String(err)}`);
       return errorOutput(file, e.code, e.message, performance.now() - t0);
     }
   }

@@ -37,5 +37,7 @@ if (parentPort && data?.echolineMiner === true) {
   });
   // Warm up before reporting ready: the first PDF loads pdf.js's worker module (~1 s), a cost of
   // starting the thread that must not count against the first real document's time limit.
-  void miner.mine({ data: new TextEncoder().encode(WARM_UP_PDF), filename: "warm-up.pdf" }).finally(() => port.postMessage({ ready: true }));
+  void miner
+    .mine({ data: new TextEncoder().encode(WARM_UP_PDF), filename: "warm-up.pdf" })
+    .finally(() => port.postMessage({ ready: true }));
 }

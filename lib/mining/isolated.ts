@@ -40,7 +40,12 @@ function errorOutput(file: string, code: ErrorCode, message: string, ms: number)
 const seconds = (ms: number) => String(Math.round(ms / 100) / 10);
 
 export function createIsolatedMiner(options: IsolatedMinerOptions = {}): Miner {
-  const { hardTimeoutMs: hard, memoryLimitMb = DEFAULT_MEMORY_LIMIT_MB, transferInput = true, ...minerOptions } = options;
+  const {
+    hardTimeoutMs: hard,
+    memoryLimitMb = DEFAULT_MEMORY_LIMIT_MB,
+    transferInput = true,
+    ...minerOptions
+  } = options;
   const hardTimeoutMs = hard ?? (minerOptions.timeoutMs ?? DEFAULT_TIMEOUT_MS) + 2000;
   let worker: Worker | null = null;
   // Resolves when a thread has loaded the miner: the per-document limit starts only then.
@@ -94,7 +99,10 @@ export function createIsolatedMiner(options: IsolatedMinerOptions = {}): Miner {
     if (closed) return errorOutput(file, "internal", "The miner was closed.", 0);
     const w = (worker ??= spawn());
     const id = nextId++;
-    const started = await Promise.race([readyOf.get(w), new Promise<false>((r) => setTimeout(() => r(false), STARTUP_LIMIT_MS).unref())]);
+    const started = await Promise.race([
+      readyOf.get(w),
+      new Promise<false>((r) => setTimeout(() => r(false), STARTUP_LIMIT_MS).unref()),
+    ]);
     if (!started) {
       retire(w);
       return errorOutput(file, "internal", "The mining thread did not start; see the worker log.", 0);
@@ -115,25 +123,47 @@ export function createIsolatedMiner(options: IsolatedMinerOptions = {}): Miner {
         retire(w);
         const s = Math.round(performance.now() - t0);
         if (err.code === "ERR_WORKER_OUT_OF_MEMORY") {
-          done(errorOutput(file, "too_large", `Mining this file needed more than ${memoryLimitMb} MB of memory and was stopped; the file may be damaged or unusually complex.`, s));
+          done(
+            errorOutput(
+              file,
+              "too_large",
+              `Mining this file needed more than ${memoryLimitMb} MB of memory and was stopped; the file may be damaged or unusually complex.`,
+              s,
+            ),
+          );
         } else {
           done(errorOutput(file, "internal", `The mining thread failed: ${err.message.slice(0, 200)}`, s));
         }
       };
       const onExit = (code: number) => {
         retire(w);
-        done(errorOutput(file, "internal", `The mining thread stopped unexpectedly (exit code ${code}).`, performance.now() - t0));
+        done(
+          errorOutput(
+            file,
+            "internal",
+            `The mining thread stopped unexpectedly (exit code ${code}).`,
+            performance.now() - t0,
+          ),
+        );
       };
       const timer = setTimeout(() => {
         w.off("exit", onExit);
         retire(w);
-        done(errorOutput(file, "timeout", `Mining took longer than ${seconds(hardTimeoutMs)} s and was stopped; the file may be damaged or unusually complex.`, performance.now() - t0));
+        done(
+          errorOutput(
+            file,
+            "timeout",
+            `Mining took longer than ${seconds(hardTimeoutMs)} s and was stopped; the file may be damaged or unusually complex.`,
+            performance.now() - t0,
+          ),
+        );
       }, hardTimeoutMs);
       w.on("message", onMessage);
       w.on("error", onError);
       w.on("exit", onExit);
       const { data } = input;
-      const whole = data.byteOffset === 0 && data.byteLength === data.buffer.byteLength && data.buffer instanceof ArrayBuffer;
+      const whole =
+        data.byteOffset === 0 && data.byteLength === data.buffer.byteLength && data.buffer instanceof ArrayBuffer;
       // A view into a larger buffer (a pooled Buffer) would clone the whole backing store: copy the view.
       const payload = whole ? data : new Uint8Array(data);
       const request: ThreadRequest = { id, data: payload, filename: file };

@@ -2,7 +2,14 @@
 import { XMLValidator } from "fast-xml-parser";
 
 export type JatsDocument = { lines: string[]; referenceLines: string[]; meta: JatsMeta };
-export type JatsMeta = { title: string | null; authors: string[]; year: string | null; doi: string | null; venue: string | null; licence: string | null };
+export type JatsMeta = {
+  title: string | null;
+  authors: string[];
+  year: string | null;
+  doi: string | null;
+  venue: string | null;
+  licence: string | null;
+};
 
 const ENTITIES: Record<string, string> = { amp: "&", lt: "<", gt: ">", quot: '"', apos: "'", nbsp: " " };
 function decode(s: string): string {
@@ -12,7 +19,9 @@ function decode(s: string): string {
     .replace(/&(\w+);/g, (m, n: string) => ENTITIES[n] ?? m);
 }
 function text(xml: string): string {
-  return decode(xml.replace(/<[^>]+>/g, " ")).replace(/\s+/g, " ").trim();
+  return decode(xml.replace(/<[^>]+>/g, " "))
+    .replace(/\s+/g, " ")
+    .trim();
 }
 function first(xml: string, tag: string): string | null {
   const m = new RegExp(`<${tag}\\b[^>]*>([\\s\\S]*?)</${tag}>`, "i").exec(xml);
@@ -27,10 +36,19 @@ export function looksLikeXml(head: string): boolean {
 
 export function checkJats(xml: string): JatsCheck {
   const valid = XMLValidator.validate(xml);
-  if (valid !== true) return { ok: false, code: "corrupt", message: `The XML is not well formed: ${valid.err.msg} (line ${valid.err.line}).` };
+  if (valid !== true)
+    return {
+      ok: false,
+      code: "corrupt",
+      message: `The XML is not well formed: ${valid.err.msg} (line ${valid.err.line}).`,
+    };
   const root = /<(?!\?|!)([A-Za-z][\w:.-]*)/.exec(xml)?.[1];
   if (root !== "article" || !/<article-meta\b/.test(xml)) {
-    return { ok: false, code: "not_jats", message: `The XML root is <${root ?? "?"}>, not a JATS <article> with <article-meta>; only JATS article XML can be mined.` };
+    return {
+      ok: false,
+      code: "not_jats",
+      message: `The XML root is <${root ?? "?"}>, not a JATS <article> with <article-meta>; only JATS article XML can be mined.`,
+    };
   }
   return { ok: true };
 }
@@ -38,13 +56,18 @@ export function checkJats(xml: string): JatsCheck {
 export function parseJats(xml: string): JatsDocument {
   const front = /<article-meta\b[\s\S]*?<\/article-meta>/.exec(xml)?.[0] ?? "";
   const journal = /<journal-meta\b[\s\S]*?<\/journal-meta>/.exec(xml)?.[0] ?? "";
-  const authors = [...front.matchAll(/<contrib\b[^>]*contrib-type="author"[^>]*>([\s\S]*?)<\/contrib>/g)].map((m) => {
-    const sn = first(m[1], "surname");
-    const gn = first(m[1], "given-names");
-    return [sn, gn].filter(Boolean).join(", ");
-  }).filter(Boolean);
+  const authors = [...front.matchAll(/<contrib\b[^>]*contrib-type="author"[^>]*>([\s\S]*?)<\/contrib>/g)]
+    .map((m) => {
+      const sn = first(m[1], "surname");
+      const gn = first(m[1], "given-names");
+      return [sn, gn].filter(Boolean).join(", ");
+    })
+    .filter(Boolean);
   const licenceBlock = /<license\b([^>]*)>([\s\S]*?)<\/license>/.exec(front);
-  const licenceUrl = licenceBlock ? /xlink:href="([^"]+)"/.exec(licenceBlock[1])?.[1] ?? /<ext-link[^>]*xlink:href="([^"]+)"/.exec(licenceBlock[2])?.[1] : null;
+  const licenceUrl = licenceBlock
+    ? (/xlink:href="([^"]+)"/.exec(licenceBlock[1])?.[1] ??
+      /<ext-link[^>]*xlink:href="([^"]+)"/.exec(licenceBlock[2])?.[1])
+    : null;
   const meta: JatsMeta = {
     title: first(front, "article-title"),
     authors,

@@ -69,7 +69,13 @@ function rowsOf(items: PositionedItem[]): Row[] {
     let group: typeof ps = [];
     const flush = () => {
       if (!group.length) return;
-      row.segs.push({ x0: group[0].x0, x1: Math.max(...group.map((g) => g.x1)), y: row.y, size: row.size, text: glue(group) });
+      row.segs.push({
+        x0: group[0].x0,
+        x1: Math.max(...group.map((g) => g.x1)),
+        y: row.y,
+        size: row.size,
+        text: glue(group),
+      });
       group = [];
     };
     let lastX1 = Number.NEGATIVE_INFINITY;
@@ -137,7 +143,9 @@ function findGutter(rows: Row[]): { from: number; to: number } | null {
 
 /** The text of one page in reading order, one line per row (and per column side), "\n" between. */
 export function pageTextInReadingOrder(items: PositionedItem[]): string {
-  const rotated = items.filter((it) => it.str.trim() && it.transform.length >= 6 && isRotated(it)).map((it) => it.str.trim());
+  const rotated = items
+    .filter((it) => it.str.trim() && it.transform.length >= 6 && isRotated(it))
+    .map((it) => it.str.trim());
   const body = bodyInReadingOrder(rowsOf(items));
   // Rotated text goes after the body, in drawing order, so it cannot split a sentence.
   return rotated.length ? [body, ...rotated].filter(Boolean).join("\n") : body;

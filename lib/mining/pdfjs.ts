@@ -49,7 +49,12 @@ const WORKER_EXPORT = "export{WorkerMessageHandler};";
 
 function runWorkerWithoutLoader(file: string): boolean {
   const source = patchedWorkerSource(file);
-  if (source.split(WORKER_EXPORT).length !== 2 || source.split("import.meta").length !== 2 || !source.includes("import.meta.url")) return false;
+  if (
+    source.split(WORKER_EXPORT).length !== 2 ||
+    source.split("import.meta").length !== 2 ||
+    !source.includes("import.meta.url")
+  )
+    return false;
   const body = source.replace(WORKER_EXPORT, "").replace("import.meta.url", JSON.stringify(pathToFileURL(file).href));
   try {
     runInThisContext(`(function () {"use strict";\n${body}\n})();`, { filename: file });

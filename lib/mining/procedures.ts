@@ -16,7 +16,10 @@ export const defaultProcedures: ProcedurePattern[] = [
     label: "2SLS with residuals substituted for the regressor",
     description:
       "A two-stage least squares description in which the first-stage residuals, not the fitted (predicted) values, replace the endogenous regressor in the second stage.",
-    allOf: ["(two[- ]stage least squares|2sls|two[- ]stage (procedure|approach|model|estimation)|first[- ]stage)", "residuals?"],
+    allOf: [
+      "(two[- ]stage least squares|2sls|two[- ]stage (procedure|approach|model|estimation)|first[- ]stage)",
+      "residuals?",
+    ],
     anyOf: ["(in place of|instead of|replac\\w*|substitut\\w*|entered|used as (the )?(regressor|predictor))"],
     // A control-function description (residuals added next to the regressor) is a different, valid method.
     noneOf: ["control function", "(alongside|in addition to|as well as) (the )?(original|endogenous)"],
@@ -26,7 +29,10 @@ export const defaultProcedures: ProcedurePattern[] = [
     label: "Single-factor test as proof of no common method bias",
     description:
       "A single-factor (one-factor) test presented as evidence that common method variance or bias is absent or not a concern.",
-    allOf: ["(single[- ]factor|one[- ]factor|single (general )?factor|first factor|harman)", "(common[- ]method|method (variance|bias)|\\bcmv\\b|\\bcmb\\b)"],
+    allOf: [
+      "(single[- ]factor|one[- ]factor|single (general )?factor|first factor|harman)",
+      "(common[- ]method|method (variance|bias)|\\bcmv\\b|\\bcmb\\b)",
+    ],
     // The sentence must present the test as settling the question.
     anyOf: [
       "not (a |an )?(serious )?(concern|problem|issue|threat)",
@@ -34,11 +40,15 @@ export const defaultProcedures: ProcedurePattern[] = [
       "(demonstrat|prov|confirm|establish|show)\\w* that (common[- ]method|method|cmv|cmb|there)",
       "(is|was) not (an? )?(significant|substantial|major)",
     ],
-    noneOf: ["(cannot|does not|do not|is not able to|unable to) (rule out|prove|demonstrate|show)", "insensitive", "limitation"],
+    noneOf: [
+      "(cannot|does not|do not|is not able to|unable to) (rule out|prove|demonstrate|show)",
+      "insensitive",
+      "limitation",
+    ],
   },
 ];
 
-export function compileProcedures(list: ProcedurePattern[]): ((sentence: string) => ProcedurePattern | null) {
+export function compileProcedures(list: ProcedurePattern[]): (sentence: string) => ProcedurePattern | null {
   const compiled = list.map((p) => ({
     p,
     all: p.allOf.map((s) => new RegExp(s, "i")),

@@ -10,12 +10,16 @@ export function normaliseDoi(raw: string): string | null {
 }
 
 const NUMBERED_START = /^\s*(?:\[(\d{1,4})\]|(\d{1,4})\.\s)/;
-const APA_START = /^\s*(?:\p{Lu}[\p{L}'’-]+(?:\s\p{Lu}[\p{L}'’-]+)*,\s(?:\p{Lu}\.\s?)+|\p{Lu}[\p{L}'’-]+ (?:et al\.|[A-Z]{2,}))/u;
+const APA_START =
+  /^\s*(?:\p{Lu}[\p{L}'’-]+(?:\s\p{Lu}[\p{L}'’-]+)*,\s(?:\p{Lu}\.\s?)+|\p{Lu}[\p{L}'’-]+ (?:et al\.|[A-Z]{2,}))/u;
 const YEAR_PAREN = /\((1[6-9]\d{2}|20\d{2})[a-z]?(?:,[^)]*)?\)|\((n\.d\.|in press)\)/;
 
 /** Split the text after a "References" heading into entries. Lines are joined until the next entry start. */
 export function splitReferences(text: string): string[] {
-  const lines = text.split("\n").map((l) => l.trim()).filter(Boolean);
+  const lines = text
+    .split("\n")
+    .map((l) => l.trim())
+    .filter(Boolean);
   const numbered = lines.filter((l) => NUMBERED_START.test(l)).length >= Math.max(2, lines.length * 0.3);
   const entries: string[] = [];
   for (const line of lines) {
@@ -27,7 +31,8 @@ export function splitReferences(text: string): string[] {
       const prev = entries[entries.length - 1];
       // A line that ends in a hyphen inside a word was broken by layout; a DOI or URL continues without a space.
       if (/[\p{Ll}]-$/u.test(prev) && /^\p{Ll}/u.test(line)) entries[entries.length - 1] = prev.slice(0, -1) + line;
-      else if (/(\/|\.)$/.test(prev) && /^[\w./-]+$/.test(line) && /doi|https?:/i.test(prev)) entries[entries.length - 1] = prev + line;
+      else if (/(\/|\.)$/.test(prev) && /^[\w./-]+$/.test(line) && /doi|https?:/i.test(prev))
+        entries[entries.length - 1] = prev + line;
       else entries[entries.length - 1] = `${prev} ${line}`;
     }
   }
@@ -35,15 +40,23 @@ export function splitReferences(text: string): string[] {
 }
 
 function clean(s: string | undefined | null): string | null {
-  const t = (s ?? "").replace(/\s+/g, " ").replace(/^[\s,.;:"“”]+|[\s,.;:"“”]+$/g, "").trim();
+  const t = (s ?? "")
+    .replace(/\s+/g, " ")
+    .replace(/^[\s,.;:"“”]+|[\s,.;:"“”]+$/g, "")
+    .trim();
   return t || null;
 }
 
 function kindOf(rest: string, container: string | null): Reference["kind"] {
-  if (/\bIn\s+(?:[^,]*\(Eds?\.\)|Proc\.|Proceedings|.*\bEds?\.)/.test(rest) || /\bin\s+(?:Proc\.|Proceedings)/i.test(rest)) return "chapter";
+  if (
+    /\bIn\s+(?:[^,]*\(Eds?\.\)|Proc\.|Proceedings|.*\bEds?\.)/.test(rest) ||
+    /\bin\s+(?:Proc\.|Proceedings)/i.test(rest)
+  )
+    return "chapter";
   if (container && /\d+\s*(?:\(\d+[^)]*\))?\s*,\s*(?:e?\d+|pp?\.)/.test(rest)) return "article";
   if (/\bvol\.\s*\d+|\bno\.\s*\d+/i.test(rest) && container) return "article";
-  if (/\(\d+(?:st|nd|rd|th)?\s*ed\.\)|\bed\.|edition|Press|Publishing|Books|Academic|House|University/i.test(rest)) return "book";
+  if (/\(\d+(?:st|nd|rd|th)?\s*ed\.\)|\bed\.|edition|Press|Publishing|Books|Academic|House|University/i.test(rest))
+    return "book";
   if (/unpublished|manuscript|thesis|dissertation|report|retrieved/i.test(rest)) return "other";
   return container ? "article" : "other";
 }
@@ -79,10 +92,15 @@ function parseNumberedBody(body: string): Omit<Reference, "raw" | "doi" | "numbe
   const q = /^(.*?),\s*[“"](.+?)[,.]?[”"]\s*,?\s*(.*)$/.exec(body);
   const year = (body.match(/\b(1[6-9]\d{2}|20\d{2})[a-z]?\b(?![^()]*\)\s*[A-Z])/g) ?? []).at(-1) ?? null;
   if (q) {
-    const authors = q[1].split(/\s*,\s*(?:and\s+)?|\s+and\s+/).map((a) => a.trim()).filter(Boolean);
+    const authors = q[1]
+      .split(/\s*,\s*(?:and\s+)?|\s+and\s+/)
+      .map((a) => a.trim())
+      .filter(Boolean);
     const rest = q[3];
     const chapter = /^in\s+/i.test(rest);
-    const container = clean(rest.replace(/^in\s+/i, "").split(/,\s*(?:vol\.|no\.|pp\.|\d{4}|[A-Z]\.\s*\w+,?\s*Eds?\.)/)[0]);
+    const container = clean(
+      rest.replace(/^in\s+/i, "").split(/,\s*(?:vol\.|no\.|pp\.|\d{4}|[A-Z]\.\s*\w+,?\s*Eds?\.)/)[0],
+    );
     return { authors, year, title: clean(q[2]), container, kind: chapter ? "chapter" : "article" };
   }
   // Book: A. Author, Title, 2nd ed. Place: Publisher, 2010.
@@ -94,7 +112,13 @@ function parseNumberedBody(body: string): Omit<Reference, "raw" | "doi" | "numbe
     i++;
   }
   const title = clean(parts[i]);
-  return { authors: authorParts, year, title, container: null, kind: /ed\.|Press|Books|Academic|Vale|House/.test(body) ? "book" : "other" };
+  return {
+    authors: authorParts,
+    year,
+    title,
+    container: null,
+    kind: /ed\.|Press|Books|Academic|Vale|House/.test(body) ? "book" : "other",
+  };
 }
 
 export function parseReference(raw: string): Reference {
@@ -104,7 +128,8 @@ export function parseReference(raw: string): Reference {
   if (nm) {
     const number = Number(nm[1] ?? nm[2]);
     const body = text.slice(nm[0].length).trim();
-    const parsed = YEAR_PAREN.test(body.slice(0, 200)) && APA_START.test(body) ? parseApa(body) : parseNumberedBody(body);
+    const parsed =
+      YEAR_PAREN.test(body.slice(0, 200)) && APA_START.test(body) ? parseApa(body) : parseNumberedBody(body);
     return { raw: text, doi, number, ...parsed, title: stripEdition(parsed.title) };
   }
   const parsed = parseApa(text);

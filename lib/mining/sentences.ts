@@ -8,17 +8,72 @@
 const DOT = "\u2024"; // ONE DOT LEADER: never present in extracted text, same length as "."
 
 const abbreviations = [
-  "e.g.", "i.e.", "et al.", "etc.", "vs.", "cf.", "ca.", "approx.", "resp.", "Fig.", "Figs.", "Tab.", "No.", "Nos.",
-  "Vol.", "vol.", "no.", "pp.", "p.", "chap.", "Chap.", "ch.", "sec.", "Sec.", "para.", "Eq.", "eq.", "Dr.", "Mr.",
-  "Ms.", "Mrs.", "Prof.", "Inc.", "Ltd.", "Co.", "St.", "Ed.", "Eds.", "ed.", "eds.", "Rev.", "Suppl.", "min.",
-  "max.", "Jr.", "approx.", "viz.", "al.", "Proc.", "Symp.", "Univ.", "Dept.", "n.d.", "S.D.", "M.A.", "Ph.D.",
+  "e.g.",
+  "i.e.",
+  "et al.",
+  "etc.",
+  "vs.",
+  "cf.",
+  "ca.",
+  "approx.",
+  "resp.",
+  "Fig.",
+  "Figs.",
+  "Tab.",
+  "No.",
+  "Nos.",
+  "Vol.",
+  "vol.",
+  "no.",
+  "pp.",
+  "p.",
+  "chap.",
+  "Chap.",
+  "ch.",
+  "sec.",
+  "Sec.",
+  "para.",
+  "Eq.",
+  "eq.",
+  "Dr.",
+  "Mr.",
+  "Ms.",
+  "Mrs.",
+  "Prof.",
+  "Inc.",
+  "Ltd.",
+  "Co.",
+  "St.",
+  "Ed.",
+  "Eds.",
+  "ed.",
+  "eds.",
+  "Rev.",
+  "Suppl.",
+  "min.",
+  "max.",
+  "Jr.",
+  "approx.",
+  "viz.",
+  "al.",
+  "Proc.",
+  "Symp.",
+  "Univ.",
+  "Dept.",
+  "n.d.",
+  "S.D.",
+  "M.A.",
+  "Ph.D.",
 ];
 
 function escape(s: string): string {
   return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 }
 const abbrevRe = new RegExp(
-  `(?<![\\p{L}])(${abbreviations.sort((a, b) => b.length - a.length).map(escape).join("|")})`,
+  `(?<![\\p{L}])(${abbreviations
+    .sort((a, b) => b.length - a.length)
+    .map(escape)
+    .join("|")})`,
   "gu",
 );
 
@@ -45,7 +100,8 @@ export function mask(text: string): string {
 // "1.5"-like dots, which are masked already). That rule is applied here in one linear pass, with
 // natural's own two patterns (natural 8.1.1, lib/natural/tokenizers/sentence_tokenizer.js);
 // tests/unit/mining/sentences-scale.test.ts checks that the output equals natural's on whole texts.
-const NATURAL_URI = /(https?:\/\/\S+|www\.\S+|ftp:\/\/\S+|(mailto:)?[a-zA-Z0-9._%+-]+@[a-zA-Z0-9.-]+\.[a-zA-Z]{2,}|file:\/\/\S+)/gi;
+const NATURAL_URI =
+  /(https?:\/\/\S+|www\.\S+|ftp:\/\/\S+|(mailto:)?[a-zA-Z0-9._%+-]+@[a-zA-Z0-9.-]+\.[a-zA-Z]{2,}|file:\/\/\S+)/gi;
 const NATURAL_DELIMITER = /([.?!… ]*)([.?!…])(["'”’)}\]]?)/g;
 
 /** A character absent from the text, to stand for one URI while delimiters are found (natural uses "{{URI_n}}"). */

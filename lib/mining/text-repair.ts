@@ -1,6 +1,6 @@
 // Repairs for text taken from a PDF text layer, page by page.
 
-const LIGATURES: Record<string, string> = { "ﬁ": "fi", "ﬂ": "fl", "ﬀ": "ff", "ﬃ": "ffi", "ﬄ": "ffl", "ﬅ": "st", "ﬆ": "st" };
+const LIGATURES: Record<string, string> = { ﬁ: "fi", ﬂ: "fl", ﬀ: "ff", ﬃ: "ffi", ﬄ: "ffl", ﬅ: "st", ﬆ: "st" };
 
 export function fixLigatures(text: string): string {
   return text.replace(/[ﬀ-ﬆ]/g, (c) => LIGATURES[c] ?? c);
@@ -8,7 +8,8 @@ export function fixLigatures(text: string): string {
 
 // Prefixes that usually form real compounds ("self-report", "item-total", "two-factor"): when a line
 // breaks after one of them the hyphen is kept, unless the document itself spells the joined word.
-const KEEP_HYPHEN_PREFIX = /(?:^|[^\p{L}])(self|non|cross|item|well|quasi|semi|multi|two|one|three|four|five|six|seven|eight|nine|ten|first|second|third|test|follow|early|late|long|short|high|low)-$/iu;
+const KEEP_HYPHEN_PREFIX =
+  /(?:^|[^\p{L}])(self|non|cross|item|well|quasi|semi|multi|two|one|three|four|five|six|seven|eight|nine|ten|first|second|third|test|follow|early|late|long|short|high|low)-$/iu;
 
 /**
  * Join words broken at line ends. "relia-\nbility" → "reliability"; a hyphen before a capital or a
@@ -58,7 +59,14 @@ export function removeRunningLines(pages: string[]): string[] {
         if (!t) return true;
         if (edgeIdx.has(i) && /^(?:page\s+)?\d{1,4}(?:\s*(?:of|\/)\s*\d{1,4})?$/i.test(t)) return false;
         // Short pages (a title page, a table) have no body to tell running lines from.
-        if (edgeIdx.has(i) && nonEmptyIdx.length >= 6 && pages.length >= 2 && (edgeCount.get(norm(l)) ?? 0) >= minPages && t.length < 160) return false;
+        if (
+          edgeIdx.has(i) &&
+          nonEmptyIdx.length >= 6 &&
+          pages.length >= 2 &&
+          (edgeCount.get(norm(l)) ?? 0) >= minPages &&
+          t.length < 160
+        )
+          return false;
         return true;
       })
       .join("\n");

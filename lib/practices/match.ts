@@ -27,7 +27,12 @@ export function comparatorFamily(c: Comparator): ComparatorFamily {
 export function parseStatValue(v: number | string | null | undefined): number | null {
   if (typeof v === "number") return Number.isFinite(v) ? v : null;
   if (typeof v !== "string") return null;
-  const t = v.trim().replace(/^([<>]=?|=|≥|≤)\s*/, "").replace(/^([−-])?,/, "$1.").replace(/^([−-]?\d*),(\d+)$/, "$1.$2").replace("−", "-");
+  const t = v
+    .trim()
+    .replace(/^([<>]=?|=|≥|≤)\s*/, "")
+    .replace(/^([−-])?,/, "$1.")
+    .replace(/^([−-]?\d*),(\d+)$/, "$1.$2")
+    .replace("−", "-");
   if (!/^-?(\d+\.?\d*|\.\d+)$/.test(t)) return null;
   const n = Number(t);
   return Number.isFinite(n) ? n : null;

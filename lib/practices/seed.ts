@@ -52,7 +52,12 @@ export function practiceId(p: Pick<Practice, "statistic" | "comparator" | "value
   return [p.statistic, op, String(p.value), ...(p.framing ? [p.framing] : [])].join("-");
 }
 
-function seed(statistic: StatisticKey, comparator: Comparator, value: number, framing: Framing | null = null): SeedPractice {
+function seed(
+  statistic: StatisticKey,
+  comparator: Comparator,
+  value: number,
+  framing: Framing | null = null,
+): SeedPractice {
   const p = { statistic, comparator, value, framing };
   return { id: practiceId(p), ...p, label: practiceLabel(p) };
 }

@@ -2,7 +2,21 @@
 // OCR and typing introduce, and nothing that can tell two works apart (numbers, part numbers).
 
 /** Letters NFKD leaves alone but readers treat as their plain forms. */
-const FOLD: Record<string, string> = { ø: "o", Ø: "O", ł: "l", Ł: "L", đ: "d", Đ: "D", æ: "ae", Æ: "AE", œ: "oe", Œ: "OE", ß: "ss", þ: "th", ı: "i" };
+const FOLD: Record<string, string> = {
+  ø: "o",
+  Ø: "O",
+  ł: "l",
+  Ł: "L",
+  đ: "d",
+  Đ: "D",
+  æ: "ae",
+  Æ: "AE",
+  œ: "oe",
+  Œ: "OE",
+  ß: "ss",
+  þ: "th",
+  ı: "i",
+};
 
 export function foldAscii(s: string): string {
   return s
@@ -27,15 +41,28 @@ export function normaliseDoi(doi: string | null | undefined): string | null {
   } catch {
     // A malformed escape is left as it is; the pattern check below decides.
   }
-  d = d.replace(/\s+/g, "").replace(/[.,;:)\]}>'"]+$/, "").toLowerCase();
+  d = d
+    .replace(/\s+/g, "")
+    .replace(/[.,;:)\]}>'"]+$/, "")
+    .toLowerCase();
   return /^10\.\d{4,9}\/\S+$/.test(d) ? d : null;
 }
 
 const ORDINAL_WORDS: Record<string, number> = {
-  first: 1, second: 2, third: 3, fourth: 4, fifth: 5, sixth: 6, seventh: 7, eighth: 8, ninth: 9, tenth: 10,
+  first: 1,
+  second: 2,
+  third: 3,
+  fourth: 4,
+  fifth: 5,
+  sixth: 6,
+  seventh: 7,
+  eighth: 8,
+  ninth: 9,
+  tenth: 10,
 };
 const EDITION_NUM = /\(?\b(\d{1,2})\s*(?:st|nd|rd|th|e|\.)?\s*(?:ed|edn|edition|aufl|auflage)\b\.?\)?/i;
-const EDITION_WORD = /\(?\b(first|second|third|fourth|fifth|sixth|seventh|eighth|ninth|tenth)\s+(?:ed|edn|edition)\b\.?\)?/i;
+const EDITION_WORD =
+  /\(?\b(first|second|third|fourth|fifth|sixth|seventh|eighth|ninth|tenth)\s+(?:ed|edn|edition)\b\.?\)?/i;
 const EDITION_OTHER = /\(?\b(?:rev(?:ised)?\.?|revised and expanded|expanded|updated)\s+(?:ed|edn|edition)\b\.?\)?/gi;
 
 /** Edition number written in a title or raw reference ("2nd ed.", "Third edition"), else null. */
@@ -48,10 +75,38 @@ export function editionOf(text: string | null | undefined): number | null {
 }
 
 const STOP_WORDS = new Set([
-  "a", "an", "the", "of", "and", "in", "on", "for", "to", "with", "at", "by", "from", "as", "into", "its", "or",
+  "a",
+  "an",
+  "the",
+  "of",
+  "and",
+  "in",
+  "on",
+  "for",
+  "to",
+  "with",
+  "at",
+  "by",
+  "from",
+  "as",
+  "into",
+  "its",
+  "or",
 ]);
 
-const GREEK: Record<string, string> = { α: "alpha", β: "beta", γ: "gamma", δ: "delta", κ: "kappa", λ: "lambda", ρ: "rho", σ: "sigma", χ: "chi", ω: "omega", η: "eta" };
+const GREEK: Record<string, string> = {
+  α: "alpha",
+  β: "beta",
+  γ: "gamma",
+  δ: "delta",
+  κ: "kappa",
+  λ: "lambda",
+  ρ: "rho",
+  σ: "sigma",
+  χ: "chi",
+  ω: "omega",
+  η: "eta",
+};
 
 function cleanTitle(title: string): string {
   // Greek letters are spelled out so "coefficient α" meets "coefficient alpha".
@@ -67,7 +122,10 @@ function cleanTitle(title: string): string {
 const ABBREVIATIONS: Record<string, string> = { vs: "versus", v: "versus" };
 
 function tokensOf(cleaned: string): string[] {
-  const all = cleaned.split(/[^\p{L}\p{N}]+/u).filter(Boolean).map((w) => ABBREVIATIONS[w] ?? w);
+  const all = cleaned
+    .split(/[^\p{L}\p{N}]+/u)
+    .filter(Boolean)
+    .map((w) => ABBREVIATIONS[w] ?? w);
   const kept = all.filter((w) => !STOP_WORDS.has(w));
   return kept.length > 0 ? kept : all;
 }
@@ -87,8 +145,31 @@ export function mainTitle(title: string | null | undefined): string | null {
   return main && main !== normaliseTitle(title) ? main : null;
 }
 
-const PARTICLES = new Set(["van", "von", "der", "den", "de", "del", "della", "di", "da", "du", "la", "le", "ten", "ter", "op", "het", "dos", "das", "y", "zu", "vom"]);
-const CORPORATE = /\b(association|institute|institut|council|committee|commission|organi[sz]ation|society|group|agency|office|board|department|ministry|university|panel|centre|center|bureau|foundation|consortium|network|authority|collaboration|team|service|programme|program)\b/i;
+const PARTICLES = new Set([
+  "van",
+  "von",
+  "der",
+  "den",
+  "de",
+  "del",
+  "della",
+  "di",
+  "da",
+  "du",
+  "la",
+  "le",
+  "ten",
+  "ter",
+  "op",
+  "het",
+  "dos",
+  "das",
+  "y",
+  "zu",
+  "vom",
+]);
+const CORPORATE =
+  /\b(association|institute|institut|council|committee|commission|organi[sz]ation|society|group|agency|office|board|department|ministry|university|panel|centre|center|bureau|foundation|consortium|network|authority|collaboration|team|service|programme|program)\b/i;
 const INITIAL = /^(?:\p{Lu}\.?-?){1,3}$|^\p{Lu}\.(?:-?\p{Lu}\.)*$/u;
 
 function cleanName(s: string): string {
@@ -105,7 +186,12 @@ function isInitial(token: string): boolean {
 }
 
 function lowerName(parts: string[]): string {
-  return parts.join(" ").toLowerCase().replace(/[^a-z0-9' -]/g, "").replace(/\s+/g, " ").trim();
+  return parts
+    .join(" ")
+    .toLowerCase()
+    .replace(/[^a-z0-9' -]/g, "")
+    .replace(/\s+/g, " ")
+    .trim();
 }
 
 /**
@@ -130,7 +216,11 @@ export function firstAuthorSurname(author: string | readonly string[] | null | u
 
   if (comma >= 0) {
     const left = s.slice(0, comma).trim().split(/\s+/);
-    const right = s.slice(comma + 1).trim().split(/\s+/).filter(Boolean);
+    const right = s
+      .slice(comma + 1)
+      .trim()
+      .split(/\s+/)
+      .filter(Boolean);
     if (left.length > 1 && isInitial(left[0])) {
       // "T. B. Okafor, M. Lindqvist": given names first, a comma between authors.
       return lowerName(left.filter((t) => !isInitial(t)));
@@ -173,7 +263,11 @@ export function normaliseYear(year: string | number | null | undefined): number 
  * it are the ones worth scoring; a typo in a surname escapes the block, so callers that can afford
  * it also block on year alone.
  */
-export function referenceKey(ref: { authors?: readonly string[]; firstAuthor?: string | null; year: string | null }): string {
+export function referenceKey(ref: {
+  authors?: readonly string[];
+  firstAuthor?: string | null;
+  year: string | null;
+}): string {
   const surname = surnameKey(firstAuthorSurname(ref.authors ?? ref.firstAuthor ?? null));
   const year = normaliseYear(ref.year);
   return `${surname ?? "?"}:${year ?? "?"}`;

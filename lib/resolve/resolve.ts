@@ -27,7 +27,8 @@ export function resolveReference(
     throw new TypeError("resolveReference needs a parsed reference with an authors array");
   }
   if (!Array.isArray(candidates)) throw new TypeError("resolveReference needs an array of candidates");
-  if (!Number.isFinite(threshold) || threshold < 0 || threshold > 1) throw new RangeError("threshold must be between 0 and 1");
+  if (!Number.isFinite(threshold) || threshold < 0 || threshold > 1)
+    throw new RangeError("threshold must be between 0 and 1");
 
   const doi = normaliseDoi(ref.doi) ?? normaliseDoi(/\b10\.\d{4,9}\/\S+/.exec(ref.raw ?? "")?.[0] ?? null);
   if (doi) {

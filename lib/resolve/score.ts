@@ -39,7 +39,7 @@ function softTokenDice(a: string[], b: string[]): number {
  */
 function mergeCompounds(tokens: string[], other: ReadonlySet<string>): string[] {
   const out: string[] = [];
-  for (let i = 0; i < tokens.length; ) {
+  for (let i = 0; i < tokens.length;) {
     let taken = 1;
     if (!other.has(tokens[i])) {
       for (let k = Math.min(4, tokens.length - i); k >= 2; k--) {
@@ -76,8 +76,14 @@ export function titleSimilarity(a: string, b: string): number {
   const tb = mergeCompounds(tb0, new Set(ta));
   const dice = softTokenDice(ta, tb);
   let s = 0.4 * jw(ca, cb) + 0.6 * dice * dice;
-  const na = ta.filter((t) => NUMBERISH.test(t)).sort().join(" ");
-  const nb = tb.filter((t) => NUMBERISH.test(t)).sort().join(" ");
+  const na = ta
+    .filter((t) => NUMBERISH.test(t))
+    .sort()
+    .join(" ");
+  const nb = tb
+    .filter((t) => NUMBERISH.test(t))
+    .sort()
+    .join(" ");
   if (na !== nb) s *= 0.85;
   return s;
 }

@@ -56,7 +56,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
     // one line each, no stack trace. Anything else is logged in full.
     error(error) {
       const name = (error as { type?: string }).type ?? error.name;
-      if (["CredentialsSignin", "MissingCSRF", "AccessDenied", "Verification"].includes(name)) console.warn(`[auth] ${name}`);
+      if (["CredentialsSignin", "MissingCSRF", "AccessDenied", "Verification"].includes(name))
+        console.warn(`[auth] ${name}`);
       else console.error("[auth]", error);
     },
   },
@@ -89,7 +90,9 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
     Credentials({
       credentials: { email: {}, password: {} },
       async authorize(credentials, request) {
-        const email = String(credentials?.email ?? "").trim().toLowerCase();
+        const email = String(credentials?.email ?? "")
+          .trim()
+          .toLowerCase();
         const password = String(credentials?.password ?? "");
         const ip = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? "local";
         if (!email || !password || password.length > 200) return null;
@@ -124,7 +127,10 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
       return { sub: token.sub, email: token.email, name: token.name, iat: token.iat, exp: token.exp, jti: token.jti };
     },
     async session({ session, token }) {
-      return { expires: session.expires, user: { id: token.sub ?? "", email: session.user?.email ?? "", name: session.user?.name ?? null } } as typeof session;
+      return {
+        expires: session.expires,
+        user: { id: token.sub ?? "", email: session.user?.email ?? "", name: session.user?.name ?? null },
+      } as typeof session;
     },
   },
 }));

@@ -54,12 +54,23 @@ export function errorResponse(err: unknown): Response {
     return NextResponse.json(errorBody(err.code, err.message, err.field), { status: err.status });
   }
   // next/navigation's redirect/forbidden throw control-flow errors that Next must see.
-  if (err && typeof err === "object" && "digest" in err && String((err as { digest: unknown }).digest).startsWith("NEXT_")) throw err;
+  if (
+    err &&
+    typeof err === "object" &&
+    "digest" in err &&
+    String((err as { digest: unknown }).digest).startsWith("NEXT_")
+  )
+    throw err;
   if (isDatabaseDown(err)) {
-    return NextResponse.json(errorBody("database_unavailable", "The database is not reachable right now. Try again in a minute."), { status: 503 });
+    return NextResponse.json(
+      errorBody("database_unavailable", "The database is not reachable right now. Try again in a minute."),
+      { status: 503 },
+    );
   }
   console.error("[route] unexpected error:", err);
-  return NextResponse.json(errorBody("internal", "Something went wrong on our side. The error was logged."), { status: 500 });
+  return NextResponse.json(errorBody("internal", "Something went wrong on our side. The error was logged."), {
+    status: 500,
+  });
 }
 
 function parse<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
@@ -67,13 +78,19 @@ function parse<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
   if (r.success) return r.data;
   const issue = r.error.issues[0];
   const field = issue?.path.join(".") || undefined;
-  throw new HttpError(400, "invalid", field ? `${field}: ${issue.message}` : issue?.message ?? "Invalid input.", field);
+  throw new HttpError(
+    400,
+    "invalid",
+    field ? `${field}: ${issue.message}` : (issue?.message ?? "Invalid input."),
+    field,
+  );
 }
 
 /** Reads a JSON body with a byte limit that holds even when Content-Length lies or is absent. */
 export async function readJson(req: Request, maxBytes: number): Promise<unknown> {
   const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw new HttpError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`, "body");
+  if (declared > maxBytes)
+    throw new HttpError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`, "body");
   const buf = await readLimited(req, maxBytes);
   if (buf.length === 0) throw new HttpError(400, "invalid", "The request needs a JSON body.", "body");
   try {

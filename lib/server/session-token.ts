@@ -19,7 +19,8 @@ export const SESSION_COOKIE = "authjs.session-token";
 
 /** next-auth prefixes the cookie with __Secure- when the site is served over https. */
 export function usesSecureCookie(forwardedProto: string | null, authUrl = process.env.AUTH_URL ?? ""): boolean {
-  const proto = forwardedProto?.split(",")[0]?.trim() || (authUrl ? new URL(authUrl).protocol.replace(":", "") : "http");
+  const proto =
+    forwardedProto?.split(",")[0]?.trim() || (authUrl ? new URL(authUrl).protocol.replace(":", "") : "http");
   return proto === "https";
 }
 

@@ -89,7 +89,11 @@ export interface PrecisionRecall {
 }
 
 export function precisionRecall({ tp, fp, fn }: Confusion): PrecisionRecall {
-  for (const [name, v] of [["tp", tp], ["fp", fp], ["fn", fn]] as const) {
+  for (const [name, v] of [
+    ["tp", tp],
+    ["fp", fp],
+    ["fn", fn],
+  ] as const) {
     if (!Number.isInteger(v) || v < 0) throw new RangeError(`${name} must be a non-negative integer, got ${String(v)}`);
   }
   const precision = tp + fp === 0 ? Number.NaN : tp / (tp + fp);

@@ -40,7 +40,8 @@ export function cochranArmitage(groups: readonly TrendGroup[]): TrendResult {
   }
   groups.forEach((g, i) => {
     if (!Number.isFinite(g.score)) throw new RangeError(`group ${i}: score must be a finite number`);
-    if (!Number.isInteger(g.total) || g.total < 0) throw new RangeError(`group ${i}: total must be a non-negative integer`);
+    if (!Number.isInteger(g.total) || g.total < 0)
+      throw new RangeError(`group ${i}: total must be a non-negative integer`);
     if (!Number.isInteger(g.cases) || g.cases < 0 || g.cases > g.total) {
       throw new RangeError(`group ${i}: cases must be an integer between 0 and total (${g.total})`);
     }
@@ -68,7 +69,8 @@ export function cochranArmitage(groups: readonly TrendGroup[]): TrendResult {
     pValue,
     direction,
     describe({ over = "the years", alpha = 0.05 } = {}) {
-      if (Number.isNaN(z)) return `No trend can be tested over ${over}: the share does not vary or there is too little data.`;
+      if (Number.isNaN(z))
+        return `No trend can be tested over ${over}: the share does not vary or there is too little data.`;
       const stats = `(z = ${z.toFixed(2)}, two-sided ${formatP(pValue)})`;
       if (direction === "none") return `The share is flat over ${over} ${stats}.`;
       const verb = direction === "increasing" ? "rises" : "falls";

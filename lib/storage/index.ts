@@ -72,7 +72,9 @@ let defaultStorage: FileStorage | null = null;
  * ECHOLINE_FILES_DIR, else `files/` inside ECHOLINE_DATA_DIR (set by the process stack), else .data/files.
  */
 export function getStorage(): FileStorage {
-  const dir = process.env.ECHOLINE_FILES_DIR ?? (process.env.ECHOLINE_DATA_DIR ? path.join(process.env.ECHOLINE_DATA_DIR, "files") : undefined);
+  const dir =
+    process.env.ECHOLINE_FILES_DIR ??
+    (process.env.ECHOLINE_DATA_DIR ? path.join(process.env.ECHOLINE_DATA_DIR, "files") : undefined);
   defaultStorage ??= folderStorage(dir);
   return defaultStorage;
 }

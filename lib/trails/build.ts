@@ -35,7 +35,9 @@ class Lookup {
   async prefetch(starts: readonly { citations: readonly TrailCitation[] }[], levels: number): Promise<void> {
     let citations: TrailCitation[] = starts.flatMap((s) => [...s.citations]);
     for (let level = 1; level <= levels && citations.length > 0; level++) {
-      const wanted = [...new Set(citations.map((c) => c.workId).filter((id): id is string => id !== null && !this.works.has(id)))];
+      const wanted = [
+        ...new Set(citations.map((c) => c.workId).filter((id): id is string => id !== null && !this.works.has(id))),
+      ];
       if (wanted.length > 0) {
         for (const id of wanted) this.works.set(id, null);
         for (const w of await this.graph.getWorks(wanted)) {
@@ -180,7 +182,7 @@ class Walker {
         continue;
       }
       const c = item.citation;
-      const work = c.workId === null ? null : this.lookup.works.get(c.workId) ?? null;
+      const work = c.workId === null ? null : (this.lookup.works.get(c.workId) ?? null);
       if (!work) {
         end(f, { kind: "unresolved", depth: 1, citationId: c.citationId, ...(c.workId ? { workId: c.workId } : {}) });
         continue;
@@ -189,7 +191,8 @@ class Walker {
         end(f, { kind: "methods_source", depth: 1, workId: work.id });
         continue;
       }
-      const next = work.articleId !== null && onStack.has(work.articleId) ? work.articleId : this.lookup.assertingArticle(work);
+      const next =
+        work.articleId !== null && onStack.has(work.articleId) ? work.articleId : this.lookup.assertingArticle(work);
       if (next === null) {
         end(f, { kind: work.type === "empirical" ? "empirical_precedent" : "unclassified", depth: 1, workId: work.id });
         continue;
@@ -228,12 +231,19 @@ class Walker {
 
 function toSummary(start: TrailStart, practiceId: string, s: Summary): TrailSummary {
   const rank = (k: TrailEnd["kind"]) => END_PRIORITY.indexOf(k);
-  const ends = [...s.ends.values()].sort((a, b) => rank(a.kind) - rank(b.kind) || a.depth - b.depth || endKey(a).localeCompare(endKey(b)));
+  const ends = [...s.ends.values()].sort(
+    (a, b) => rank(a.kind) - rank(b.kind) || a.depth - b.depth || endKey(a).localeCompare(endKey(b)),
+  );
   return { statementId: start.statementId, practiceId, ends, length: s.length, summaryEnd: ends[0] };
 }
 
 function assertStart(start: TrailStart): void {
-  if (!start || typeof start.statementId !== "string" || typeof start.articleId !== "string" || !Array.isArray(start.citations)) {
+  if (
+    !start ||
+    typeof start.statementId !== "string" ||
+    typeof start.articleId !== "string" ||
+    !Array.isArray(start.citations)
+  ) {
     throw new TypeError("a trail start needs statementId, articleId and a citations array");
   }
 }
@@ -243,30 +253,54 @@ function steps(start: TrailStart, lookup: Lookup, maxDepth: number): { nodes: Tr
   const nodes = new Map<string, TrailNode>();
   const edges: TrailEdge[] = [];
   const startId = `statement:${start.statementId}`;
-  nodes.set(startId, { id: startId, kind: "statement", statementId: start.statementId, articleId: start.articleId, depth: 0 });
-  let frontier: { nodeId: string; citations: readonly TrailCitation[] }[] = [{ nodeId: startId, citations: start.citations }];
+  nodes.set(startId, {
+    id: startId,
+    kind: "statement",
+    statementId: start.statementId,
+    articleId: start.articleId,
+    depth: 0,
+  });
+  let frontier: { nodeId: string; citations: readonly TrailCitation[] }[] = [
+    { nodeId: startId, citations: start.citations },
+  ];
   const expanded = new Set<string>([start.articleId]);
   for (let depth = 1; depth <= maxDepth && frontier.length > 0; depth++) {
     const next: typeof frontier = [];
     for (const { nodeId, citations } of frontier) {
       for (const c of citations) {
-        const work = c.workId === null ? null : lookup.works.get(c.workId) ?? null;
+        const work = c.workId === null ? null : (lookup.works.get(c.workId) ?? null);
         const to = work ? `work:${work.id}` : `unresolved:${c.citationId}`;
         if (!nodes.has(to)) {
           nodes.set(
             to,
             work
-              ? { id: to, kind: "work", workId: work.id, type: work.type, articleId: work.articleId, year: work.year, depth }
+              ? {
+                  id: to,
+                  kind: "work",
+                  workId: work.id,
+                  type: work.type,
+                  articleId: work.articleId,
+                  year: work.year,
+                  depth,
+                }
               : { id: to, kind: "unresolved", citationId: c.citationId, workId: c.workId, depth },
           );
         }
-        edges.push({ from: nodeId, to, kind: "cites", citationId: c.citationId, locator: c.locator, secondary: c.secondary });
+        edges.push({
+          from: nodeId,
+          to,
+          kind: "cites",
+          citationId: c.citationId,
+          locator: c.locator,
+          secondary: c.secondary,
+        });
         const article = work ? lookup.assertingArticle(work) : null;
         if (article === null || expanded.has(article) || depth >= maxDepth) continue;
         expanded.add(article);
         for (const s of lookup.statements.get(article) ?? []) {
           const sid = `statement:${s.statementId}`;
-          if (!nodes.has(sid)) nodes.set(sid, { id: sid, kind: "statement", statementId: s.statementId, articleId: article, depth });
+          if (!nodes.has(sid))
+            nodes.set(sid, { id: sid, kind: "statement", statementId: s.statementId, articleId: article, depth });
           edges.push({ from: to, to: sid, kind: "asserted_in" });
           next.push({ nodeId: sid, citations: s.citations });
         }
@@ -281,7 +315,12 @@ function steps(start: TrailStart, lookup: Lookup, maxDepth: number): { nodes: Tr
  * The trail behind one statement of a practice, with its steps (nodes and edges) for display.
  * Lookups go to the graph in one batch per level of the chain.
  */
-export async function buildTrail(start: TrailStart, graph: TrailGraph, practiceId: string, opts?: TrailOptions): Promise<Trail> {
+export async function buildTrail(
+  start: TrailStart,
+  graph: TrailGraph,
+  practiceId: string,
+  opts?: TrailOptions,
+): Promise<Trail> {
   assertStart(start);
   const maxDepth = maxDepthOf(opts);
   const lookup = new Lookup(graph, practiceId);

@@ -57,13 +57,7 @@ export interface TrailGraph {
  * - depth_limit: the chain went on past opts.maxDepth.
  */
 export type TrailEndKind =
-  | "methods_source"
-  | "empirical_precedent"
-  | "unclassified"
-  | "unresolved"
-  | "no_citation"
-  | "cycle"
-  | "depth_limit";
+  "methods_source" | "empirical_precedent" | "unclassified" | "unresolved" | "no_citation" | "cycle" | "depth_limit";
 
 /** Order used for the summary end: the firmest footing the claim reaches comes first. */
 export const END_PRIORITY: readonly TrailEndKind[] = [
@@ -98,7 +92,15 @@ export interface TrailSummary {
 
 export type TrailNode =
   | { id: string; kind: "statement"; statementId: string; articleId: string; depth: number }
-  | { id: string; kind: "work"; workId: string; type: WorkType; articleId: string | null; year: number | string | null; depth: number }
+  | {
+      id: string;
+      kind: "work";
+      workId: string;
+      type: WorkType;
+      articleId: string | null;
+      year: number | string | null;
+      depth: number;
+    }
   | { id: string; kind: "unresolved"; citationId: string; workId: string | null; depth: number };
 
 export type TrailEdge =

@@ -56,7 +56,11 @@ const READER = { email: "bench-reader@example.invalid", password: "bench-reader-
 const t0 = () => process.hrtime.bigint();
 const ms = (since: bigint) => Number(process.hrtime.bigint() - since) / 1e6;
 const log = (s: string) => console.error(`[bench] ${s}`);
-const load = () => os.loadavg().map((x) => x.toFixed(2)).join(" ");
+const load = () =>
+  os
+    .loadavg()
+    .map((x) => x.toFixed(2))
+    .join(" ");
 
 /** The bench database: reused when it holds the corpus this run would generate, else made anew. */
 async function openDatabase(): Promise<{ db: DB; generated: boolean }> {
@@ -75,9 +79,21 @@ async function openDatabase(): Promise<{ db: DB; generated: boolean }> {
              (select count(*) from bench_practices) p`,
         );
         const got = r.rows[0];
-        const want = { a: ARTICLES, s: ARTICLES * STATEMENTS_PER_ARTICLE, c: ARTICLES * CITATIONS_PER_ARTICLE, p: PRACTICES_USED };
-        if (Number(got.a) === want.a && Number(got.s) === want.s && Number(got.c) === want.c && Number(got.p) === want.p) {
-          log(`reusing ${NAME} (${got.a} articles, ${got.s} statements, ${got.c} citations); --regenerate makes a new one`);
+        const want = {
+          a: ARTICLES,
+          s: ARTICLES * STATEMENTS_PER_ARTICLE,
+          c: ARTICLES * CITATIONS_PER_ARTICLE,
+          p: PRACTICES_USED,
+        };
+        if (
+          Number(got.a) === want.a &&
+          Number(got.s) === want.s &&
+          Number(got.c) === want.c &&
+          Number(got.p) === want.p
+        ) {
+          log(
+            `reusing ${NAME} (${got.a} articles, ${got.s} statements, ${got.c} citations); --regenerate makes a new one`,
+          );
           const db = createDb(url, 8);
           await migrateToLatest(db as unknown as Kysely<unknown>);
           return { db, generated: false };
@@ -106,17 +122,31 @@ async function generate(db: DB): Promise<void> {
     log(`${label}: ${(ms(s) / 1000).toFixed(1)} s`);
   };
   await seedPractices(db);
-  await step("venues", sql`insert into venues (name, is_methods_venue) select 'Synthetic venue ' || v, v <= 4 from generate_series(1, ${VENUES}) v`);
-  await step("practices used", sql`create table bench_practices as select (row_number() over (order by key)) - 1 as idx, id, statistic, comparator, value, framing from practices where key in (select key from practices order by key limit ${PRACTICES_USED})`);
-  await step("stored files", sql`insert into stored_files (sha256, size_bytes, media_type, storage_key) select md5('f'||a) || md5('g'||a), 1, 'text/plain', 'bench' from generate_series(1, ${ARTICLES}) a`);
+  await step(
+    "venues",
+    sql`insert into venues (name, is_methods_venue) select 'Synthetic venue ' || v, v <= 4 from generate_series(1, ${VENUES}) v`,
+  );
+  await step(
+    "practices used",
+    sql`create table bench_practices as select (row_number() over (order by key)) - 1 as idx, id, statistic, comparator, value, framing from practices where key in (select key from practices order by key limit ${PRACTICES_USED})`,
+  );
+  await step(
+    "stored files",
+    sql`insert into stored_files (sha256, size_bytes, media_type, storage_key) select md5('f'||a) || md5('g'||a), 1, 'text/plain', 'bench' from generate_series(1, ${ARTICLES}) a`,
+  );
   // Years rise with the article number, so an article cites earlier ones.
-  await step("articles", sql`
+  await step(
+    "articles",
+    sql`
     insert into articles (id, file_sha256, original_filename, source_kind, venue_id, year, title, authors, licence, status)
     select md5('a'||a)::uuid, md5('f'||a) || md5('g'||a), 'a'||a||'.txt', 'text', v.id, 1995 + (a * 30) / (${ARTICLES} + 1),
       'Synthetic study ' || a, jsonb_build_array('Author' || (a % 5000) || ', A.'), 'CC-BY-4.0', 'done'
     from generate_series(1, ${ARTICLES}) a
-    join (select id, row_number() over (order by name) - 1 as k from venues) v on v.k = a % ${VENUES}`);
-  await step("works (corpus + outside)", sql`
+    join (select id, row_number() over (order by name) - 1 as k from venues) v on v.k = a % ${VENUES}`,
+  );
+  await step(
+    "works (corpus + outside)",
+    sql`
     insert into works (id, title, first_author, year, kind, work_type, type_decided_by, article_id)
     select md5('wa'||a)::uuid, 'Synthetic study ' || a, 'author' || (a % 5000), (1995 + (a * 30) / (${ARTICLES} + 1))::text, 'article',
       case when a % ${VENUES} < 4 then 'methods_source' else 'empirical' end, 'venue', md5('a'||a)::uuid
@@ -124,21 +154,30 @@ async function generate(db: DB): Promise<void> {
     union all
     select md5('wo'||o)::uuid, 'Outside work ' || o, 'outside' || o, (1960 + o % 40)::text, case when o % 4 = 0 then 'book' else 'article' end,
       case when o % 4 = 0 then 'methods_source' when o % 4 = 1 then 'empirical' else 'unknown' end, 'default', null
-    from generate_series(1, ${OUTSIDE_WORKS}) o`);
+    from generate_series(1, ${OUTSIDE_WORKS}) o`,
+  );
   // 60% of references cite an earlier corpus article, the rest an outside work.
-  await step("references", sql`
+  await step(
+    "references",
+    sql`
     insert into "references" (id, article_id, ordinal, raw, year, title, kind, work_id)
     select md5('r'||a||'-'||r)::uuid, md5('a'||a)::uuid, r, 'ref', null, null, 'article',
       case when r < 9 and a > 1 then md5('wa'|| (1 + floor(random() * (a - 1))::int))::uuid
            else md5('wo'|| (1 + (a * 7 + r) % ${OUTSIDE_WORKS}))::uuid end
-    from generate_series(1, ${ARTICLES}) a, generate_series(0, ${REFS_PER_ARTICLE - 1}) r`);
-  await step("citations (3M at full size)", sql`
+    from generate_series(1, ${ARTICLES}) a, generate_series(0, ${REFS_PER_ARTICLE - 1}) r`,
+  );
+  await step(
+    "citations (3M at full size)",
+    sql`
     insert into citations (id, article_id, ordinal, sentence, authors, year, locator, secondary, reference_id)
     select md5('c'||a||'-'||o)::uuid, md5('a'||a)::uuid, o, 's', 'Author', '2000',
       case when (a + o) % 3 = 0 then 'p. 12' end, (a + o) % 23 = 0, md5('r'||a||'-'||(o % ${REFS_PER_ARTICLE}))::uuid
-    from generate_series(1, ${ARTICLES}) a, generate_series(0, ${CITATIONS_PER_ARTICLE - 1}) o`);
+    from generate_series(1, ${ARTICLES}) a, generate_series(0, ${CITATIONS_PER_ARTICLE - 1}) o`,
+  );
   // Statements 0..7 of each article are thresholds of one of the practices; the rest reported values.
-  await step("statements (2M at full size)", sql`
+  await step(
+    "statements (2M at full size)",
+    sql`
     insert into statements (id, article_id, ordinal, section, sentence, kind, statistic, comparator, value, framing, sourcing, fingerprint)
     select md5('s'||a||'-'||i)::uuid, md5('a'||a)::uuid, i, 'methods', 'Synthetic sentence', case when i < 8 then 'threshold' else 'reported' end,
       case when i < 8 then p.statistic end, case when i < 8 then p.comparator end, case when i < 8 then p.value else 0.81 end,
@@ -146,16 +185,23 @@ async function generate(db: DB): Promise<void> {
       case when i >= 8 or (a + i) % 5 = 0 then 'unsourced' when (a + i) % 3 = 0 then 'cited_with_locator' when (a + i) % 23 = 0 then 'secondary_only' else 'cited_no_locator' end,
       'fp' || i
     from generate_series(1, ${ARTICLES}) a cross join generate_series(0, ${STATEMENTS_PER_ARTICLE - 1}) i
-    join bench_practices p on p.idx = (a + i * 3) % ${PRACTICES_USED}`);
-  await step("statement practices", sql`
+    join bench_practices p on p.idx = (a + i * 3) % ${PRACTICES_USED}`,
+  );
+  await step(
+    "statement practices",
+    sql`
     insert into statement_practices (statement_id, practice_id)
     select md5('s'||a||'-'||i)::uuid, p.id from generate_series(1, ${ARTICLES}) a cross join generate_series(0, 7) i
-    join bench_practices p on p.idx = (a + i * 3) % ${PRACTICES_USED}`);
-  await step("statement citations", sql`
+    join bench_practices p on p.idx = (a + i * 3) % ${PRACTICES_USED}`,
+  );
+  await step(
+    "statement citations",
+    sql`
     insert into statement_citations (statement_id, citation_id)
     select md5('s'||a||'-'||i)::uuid, md5('c'||a||'-'||i)::uuid from generate_series(1, ${ARTICLES}) a, generate_series(0, 7) i where (a + i) % 5 <> 0
     union all
-    select md5('s'||a||'-'||i)::uuid, md5('c'||a||'-'||(i + 15))::uuid from generate_series(1, ${ARTICLES}) a, generate_series(0, 7) i where (a + i) % 5 <> 0 and (a + i) % 2 = 0`);
+    select md5('s'||a||'-'||i)::uuid, md5('c'||a||'-'||(i + 15))::uuid from generate_series(1, ${ARTICLES}) a, generate_series(0, 7) i where (a + i) % 5 <> 0 and (a + i) % 2 = 0`,
+  );
   await step("analyze", sql`analyze`);
 }
 
@@ -217,15 +263,33 @@ function buildIsStale(): boolean {
  */
 async function startNext(url: string): Promise<ChildProcess> {
   const dataDir = path.join(DATA_DIR, "bench");
-  const env = stackEnv({ appPort: APP_PORT, smtpPort: 2725, mailHttpPort: 2726, databaseUrl: url, dataDir, quiet: true });
+  const env = stackEnv({
+    appPort: APP_PORT,
+    smtpPort: 2725,
+    mailHttpPort: 2726,
+    databaseUrl: url,
+    dataDir,
+    quiet: true,
+  });
   const stale = buildIsStale();
   const next = path.join(ROOT, "node_modules", ".bin", "next");
   const script = `${stale ? `"${next}" build >&2 && ` : ""}exec "${next}" start -H 127.0.0.1 -p ${APP_PORT}`;
-  log(stale ? "build is stale: next build, then next start (under /tmp/echoline-build.lock)" : "next start (under /tmp/echoline-build.lock)");
-  const child = spawn("flock", ["/tmp/echoline-build.lock", "sh", "-c", script], { cwd: ROOT, env, detached: true, stdio: ["ignore", "ignore", "pipe"] });
+  log(
+    stale
+      ? "build is stale: next build, then next start (under /tmp/echoline-build.lock)"
+      : "next start (under /tmp/echoline-build.lock)",
+  );
+  const child = spawn("flock", ["/tmp/echoline-build.lock", "sh", "-c", script], {
+    cwd: ROOT,
+    env,
+    detached: true,
+    stdio: ["ignore", "ignore", "pipe"],
+  });
   let err = "";
   child.stderr?.on("data", (c: Buffer) => void (err = (err + c.toString()).slice(-4000)));
-  const exited = new Promise<never>((_, reject) => child.once("exit", (code) => reject(new Error(`next exited (${code}): ${err}`))));
+  const exited = new Promise<never>((_, reject) =>
+    child.once("exit", (code) => reject(new Error(`next exited (${code}): ${err}`))),
+  );
   await Promise.race([waitForHttp(`${APP}/sign-in`, 15 * 60_000), exited]);
   return child;
 }
@@ -242,13 +306,30 @@ function stopNext(child: ChildProcess): Promise<void> {
 async function readerCookie(db: DB): Promise<string> {
   const hash = await hashPassword(READER.password);
   // E-mails are unique case-insensitively (an expression index), so replace rather than upsert.
-  await db.deleteFrom("User").where(sql`lower(email)`, "=", READER.email).execute();
-  await db.insertInto("User").values({ email: READER.email, name: "Bench reader", role: "reader", password_hash: hash, emailVerified: null, image: null, deactivated_at: null }).execute();
+  await db
+    .deleteFrom("User")
+    .where(sql`lower(email)`, "=", READER.email)
+    .execute();
+  await db
+    .insertInto("User")
+    .values({
+      email: READER.email,
+      name: "Bench reader",
+      role: "reader",
+      password_hash: hash,
+      emailVerified: null,
+      image: null,
+      deactivated_at: null,
+    })
+    .execute();
   return signInOverHttp(APP, READER.email, READER.password);
 }
 
 /** The chart's own statement, exactly as lib/dashboards sends it (one statement per chart). */
-const CHART_SQL: Record<DashboardName, (f: Filters) => { compile: (db: DB) => { sql: string; parameters: readonly unknown[] } }> = {
+const CHART_SQL: Record<
+  DashboardName,
+  (f: Filters) => { compile: (db: DB) => { sql: string; parameters: readonly unknown[] } }
+> = {
   "practice-over-time": practiceOverTimeSql,
   "trail-ends": trailEndsSql,
   venues: venueComparisonSql,
@@ -261,10 +342,20 @@ async function main() {
   log(`load average at start: ${load()}`);
   const { db, generated } = await openDatabase();
   if (generated) await generate(db);
-  const counts = await sql<{ a: number; s: number; c: number }>`select (select count(*) from articles) a, (select count(*) from statements) s, (select count(*) from citations) c`.execute(db);
+  const counts = await sql<{
+    a: number;
+    s: number;
+    c: number;
+  }>`select (select count(*) from articles) a, (select count(*) from statements) s, (select count(*) from citations) c`.execute(
+    db,
+  );
   log(`corpus: ${JSON.stringify(counts.rows[0])}`);
 
-  const practices = (await db.selectFrom("bench_practices" as never).select(["id" as never]).orderBy("idx" as never).execute()) as unknown as { id: string }[];
+  const practices = (await db
+    .selectFrom("bench_practices" as never)
+    .select(["id" as never])
+    .orderBy("idx" as never)
+    .execute()) as unknown as { id: string }[];
   let trailLine = "Trail building skipped (--skip-trails): the stored trails were reused.";
   if (!SKIP_TRAILS || generated) {
     const s = t0();
@@ -281,7 +372,11 @@ async function main() {
     const s = t0();
     await refreshSummaries(db, { timings });
     const refreshSeconds = ms(s) / 1000;
-    refreshLine = `Summary refresh (concurrently, as the job runs it): ${refreshSeconds.toFixed(1)} s — ${Object.entries(timings).map(([v, x]) => `${v} ${x.toFixed(1)}`).join(", ")} (load ${load()}).`;
+    refreshLine = `Summary refresh (concurrently, as the job runs it): ${refreshSeconds.toFixed(1)} s — ${Object.entries(
+      timings,
+    )
+      .map(([v, x]) => `${v} ${x.toFixed(1)}`)
+      .join(", ")} (load ${load()}).`;
     log(refreshLine);
     await sql`analyze`.execute(db);
   }
@@ -336,7 +431,9 @@ async function main() {
       const r = await request(`${APP}/api/dashboards/no-such-chart`, {});
       if (r.status !== 401) throw new Error(`anonymous request: HTTP ${r.status}, expected 401`);
     });
-    rows.push("| dashboard route | filters | Next route p50 ms | Next route p95 ms | lib via node:http p95 ms | direct SQL p50 ms | direct SQL p95 ms | p95 ratio (Next / SQL) | load avg |");
+    rows.push(
+      "| dashboard route | filters | Next route p50 ms | Next route p95 ms | lib via node:http p95 ms | direct SQL p50 ms | direct SQL p95 ms | p95 ratio (Next / SQL) | load avg |",
+    );
     rows.push("|---|---|---|---|---|---|---|---|---|");
     const heaviest = { p95: 0, c: cases[0] };
     for (const c of cases) {
@@ -346,30 +443,44 @@ async function main() {
       const viaLib = await time(REPEAT, () => get(`http://127.0.0.1:${libPort}`, c));
       const d = await time(REPEAT, () => direct.query(q.sql, q.parameters as unknown[]));
       if (viaNext.p95 > heaviest.p95) Object.assign(heaviest, { p95: viaNext.p95, c });
-      rows.push(`| ${c.name} | ${c.label} | ${viaNext.p50.toFixed(1)} | ${viaNext.p95.toFixed(1)} | ${viaLib.p95.toFixed(1)} | ${d.p50.toFixed(1)} | ${d.p95.toFixed(1)} | ${(viaNext.p95 / d.p95).toFixed(2)} | ${load()} |`);
+      rows.push(
+        `| ${c.name} | ${c.label} | ${viaNext.p50.toFixed(1)} | ${viaNext.p95.toFixed(1)} | ${viaLib.p95.toFixed(1)} | ${d.p50.toFixed(1)} | ${d.p95.toFixed(1)} | ${(viaNext.p95 / d.p95).toFixed(2)} | ${load()} |`,
+      );
       log(rows[rows.length - 1]);
     }
     // Throughput of the heaviest chart through Next: 4 clients back to back for 10 s, loopback only.
     const until = Date.now() + 10_000;
     let done = 0;
-    await Promise.all(Array.from({ length: 4 }, async () => {
-      while (Date.now() < until) {
-        await get(APP, heaviest.c, { cookie });
-        done++;
-      }
-    }));
-    rows.push(`\nNext's own floor (anonymous request refused with 401 before any database work): p50 ${anonymous.p50.toFixed(1)} ms, p95 ${anonymous.p95.toFixed(1)} ms.`);
-    rows.push(`Fixed cost of a signed-in Next route (unknown chart → 404 after the session and actor lookup, no chart SQL): p50 ${floor.p50.toFixed(1)} ms, p95 ${floor.p95.toFixed(1)} ms.`);
-    rows.push(`Throughput, ${heaviest.c.name} (${heaviest.c.label}) through Next, 4 clients for 10 s: ${(done / 10).toFixed(0)} requests/s (load ${load()}).`);
+    await Promise.all(
+      Array.from({ length: 4 }, async () => {
+        while (Date.now() < until) {
+          await get(APP, heaviest.c, { cookie });
+          done++;
+        }
+      }),
+    );
+    rows.push(
+      `\nNext's own floor (anonymous request refused with 401 before any database work): p50 ${anonymous.p50.toFixed(1)} ms, p95 ${anonymous.p95.toFixed(1)} ms.`,
+    );
+    rows.push(
+      `Fixed cost of a signed-in Next route (unknown chart → 404 after the session and actor lookup, no chart SQL): p50 ${floor.p50.toFixed(1)} ms, p95 ${floor.p95.toFixed(1)} ms.`,
+    );
+    rows.push(
+      `Throughput, ${heaviest.c.name} (${heaviest.c.label}) through Next, 4 clients for 10 s: ${(done / 10).toFixed(0)} requests/s (load ${load()}).`,
+    );
   } finally {
     await stopNext(next);
   }
   const LIVE = `select a.year, min(case s.sourcing when 'cited_with_locator' then 1 when 'cited_no_locator' then 2 when 'secondary_only' then 3 else 4 end), count(*) from statement_practices sp join statements s on s.id = sp.statement_id join articles a on a.id = s.article_id where sp.practice_id = $1 and a.status = 'done' and a.licence is not null group by a.year, a.id`;
   const live = await time(5, () => direct.query(LIVE, [practice]));
-  rows.push(`Live join over the base tables for practice-over-time (what the summary views replace): p50 ${live.p50.toFixed(0)} ms, p95 ${live.p95.toFixed(0)} ms.`);
+  rows.push(
+    `Live join over the base tables for practice-over-time (what the summary views replace): p50 ${live.p50.toFixed(0)} ms, p95 ${live.p95.toFixed(0)} ms.`,
+  );
   rows.push(trailLine);
   rows.push(refreshLine);
-  rows.push(`Corpus: ${counts.rows[0].a} articles, ${counts.rows[0].s} statements, ${counts.rows[0].c} citations. Total bench time ${(ms(total) / 1000 / 60).toFixed(1)} min. Load average at the end: ${load()} on ${os.cpus().length} cores.`);
+  rows.push(
+    `Corpus: ${counts.rows[0].a} articles, ${counts.rows[0].s} statements, ${counts.rows[0].c} citations. Total bench time ${(ms(total) / 1000 / 60).toFixed(1)} min. Load average at the end: ${load()} on ${os.cpus().length} cores.`,
+  );
   console.log(rows.join("\n"));
   await direct.end();
   server.close();

@@ -76,13 +76,25 @@ async function inProcess(files: string[], pages: number) {
   return { seconds: (performance.now() - t) / 1000, readPagesPerSecond: pages / (readMs / 1000), readMs, mineMs };
 }
 
-type Worker = { child: ChildProcess; pid: number; timings: { readMs: number; mineMs: number; storeMs: number }[]; hwmKb: () => number; rssKb: () => number };
+type Worker = {
+  child: ChildProcess;
+  pid: number;
+  timings: { readMs: number; mineMs: number; storeMs: number }[];
+  hwmKb: () => number;
+  rssKb: () => number;
+};
 
 function startWorker(url: string, filesDir: string): Promise<Worker> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, ["--import", "tsx", "workers/index.ts"], {
       cwd: ROOT,
-      env: { ...process.env, DATABASE_URL: url, ECHOLINE_FILES_DIR: filesDir, ECHOLINE_WORKER_TIMINGS: "1", ECHOLINE_WORKER_QUEUES: process.env.BENCH_QUEUES ?? "mine-article" },
+      env: {
+        ...process.env,
+        DATABASE_URL: url,
+        ECHOLINE_FILES_DIR: filesDir,
+        ECHOLINE_WORKER_TIMINGS: "1",
+        ECHOLINE_WORKER_QUEUES: process.env.BENCH_QUEUES ?? "mine-article",
+      },
       stdio: ["ignore", "pipe", "pipe"],
     });
     const w: Worker = {
@@ -132,7 +144,12 @@ async function pipeline(files: string[], pages: number, workers: number) {
   // A ready worker that has mined nothing yet: the idle baseline (tsx, pg-boss, Kysely, the miner's modules).
   const idleMb = Math.max(...ws.map((w) => w.rssKb())) / 1024;
   const start = performance.now();
-  for (const f of files) await ingestFile(t.db, storage, { data: new Uint8Array(fs.readFileSync(f)), filename: path.basename(f), uploadedBy: null });
+  for (const f of files)
+    await ingestFile(t.db, storage, {
+      data: new Uint8Array(fs.readFileSync(f)),
+      filename: path.basename(f),
+      uploadedBy: null,
+    });
   const ingestSeconds = (performance.now() - start) / 1000;
   let done = 0;
   let failed = 0;
@@ -147,16 +164,41 @@ async function pipeline(files: string[], pages: number, workers: number) {
   const hwm = ws.map((w) => w.hwmKb());
   const timings = ws.flatMap((w) => w.timings);
   await Promise.all(ws.map(stopWorker));
-  const stmts = Number((await t.db.selectFrom("statements").select((eb) => eb.fn.countAll<number>().as("n")).executeTakeFirstOrThrow()).n);
+  const stmts = Number(
+    (
+      await t.db
+        .selectFrom("statements")
+        .select((eb) => eb.fn.countAll<number>().as("n"))
+        .executeTakeFirstOrThrow()
+    ).n,
+  );
   await t.drop();
   const sum = (k: "readMs" | "mineMs" | "storeMs") => timings.reduce((s, x) => s + x[k], 0);
-  if (process.env.BENCH_VERBOSE) console.log(`[bench] ${workers} worker(s): ingest ${ingestSeconds.toFixed(1)} s, total ${seconds.toFixed(1)} s`);
-  return { workers, seconds, pagesPerSecond: pages / seconds, done, failed, statements: stmts, peakMb: Math.max(...hwm) / 1024, idleMb, readMs: sum("readMs"), mineMs: sum("mineMs"), storeMs: sum("storeMs") };
+  if (process.env.BENCH_VERBOSE)
+    console.log(`[bench] ${workers} worker(s): ingest ${ingestSeconds.toFixed(1)} s, total ${seconds.toFixed(1)} s`);
+  return {
+    workers,
+    seconds,
+    pagesPerSecond: pages / seconds,
+    done,
+    failed,
+    statements: stmts,
+    peakMb: Math.max(...hwm) / 1024,
+    idleMb,
+    readMs: sum("readMs"),
+    mineMs: sum("mineMs"),
+    storeMs: sum("storeMs"),
+  };
 }
 
 up("test");
 await prepareTemplate();
-console.log(`[bench] generating ${COUNT} PDFs (~${PAGES_PER} pages each) with lib/demo … (load average ${os.loadavg().map((x) => x.toFixed(2)).join(", ")})`);
+console.log(
+  `[bench] generating ${COUNT} PDFs (~${PAGES_PER} pages each) with lib/demo … (load average ${os
+    .loadavg()
+    .map((x) => x.toFixed(2))
+    .join(", ")})`,
+);
 const { files, pages } = await generate();
 console.log(`[bench] ${files.length} PDFs, ${pages} pages`);
 const a = pdftotextRate(files, pages);
@@ -168,16 +210,32 @@ const longPages = pagesOf(long);
 const big = await pipeline([long], longPages, 1);
 
 const pct = (x: number) => `${(100 * x).toFixed(0)}%`;
-const minerShare = (r: { readMs: number; mineMs: number; storeMs: number }) => r.mineMs / (r.readMs + r.mineMs + r.storeMs);
+const minerShare = (r: { readMs: number; mineMs: number; storeMs: number }) =>
+  r.mineMs / (r.readMs + r.mineMs + r.storeMs);
 console.log("\n| measurement | pages/s | notes |");
 console.log("|---|---:|---|");
-console.log(`| (a) pdftotext alone, one process | ${a.pagesPerSecond.toFixed(1)} | ${pages} pages in ${a.seconds.toFixed(1)} s |`);
-console.log(`| (b) text extraction inside Echoline | ${b.readPagesPerSecond.toFixed(1)} | read ${(b.readMs / 1000).toFixed(1)} s, mining after extraction ${(b.mineMs / 1000).toFixed(1)} s (${pct(b.mineMs / (b.readMs + b.mineMs))}) |`);
+console.log(
+  `| (a) pdftotext alone, one process | ${a.pagesPerSecond.toFixed(1)} | ${pages} pages in ${a.seconds.toFixed(1)} s |`,
+);
+console.log(
+  `| (b) text extraction inside Echoline | ${b.readPagesPerSecond.toFixed(1)} | read ${(b.readMs / 1000).toFixed(1)} s, mining after extraction ${(b.mineMs / 1000).toFixed(1)} s (${pct(b.mineMs / (b.readMs + b.mineMs))}) |`,
+);
 for (const c of [c1, c2]) {
-  console.log(`| (c) whole pipeline, ${c.workers} worker(s) | ${c.pagesPerSecond.toFixed(1)} | ${pct(c.pagesPerSecond / a.pagesPerSecond)} of pdftotext; ${c.done} done, ${c.failed} failed, ${c.statements} statements; miner after extraction ${pct(minerShare(c))} of worker time (${pct(c.mineMs / (c.readMs + c.mineMs))} of extraction + mining); peak RSS ${c.peakMb.toFixed(0)} MB, idle ${c.idleMb.toFixed(0)} MB |`);
+  console.log(
+    `| (c) whole pipeline, ${c.workers} worker(s) | ${c.pagesPerSecond.toFixed(1)} | ${pct(c.pagesPerSecond / a.pagesPerSecond)} of pdftotext; ${c.done} done, ${c.failed} failed, ${c.statements} statements; miner after extraction ${pct(minerShare(c))} of worker time (${pct(c.mineMs / (c.readMs + c.mineMs))} of extraction + mining); peak RSS ${c.peakMb.toFixed(0)} MB, idle ${c.idleMb.toFixed(0)} MB |`,
+  );
 }
-console.log(`| 300-page PDF, 1 worker | ${big.pagesPerSecond.toFixed(1)} | ${longPages} pages, ${big.done ? "done" : "FAILED"}; extraction ${(big.readMs / 1000).toFixed(1)} s, mining after extraction ${(big.mineMs / 1000).toFixed(1)} s, store ${(big.storeMs / 1000).toFixed(1)} s; peak worker RSS ${big.peakMb.toFixed(0)} MB (idle worker ${big.idleMb.toFixed(0)} MB) |`);
-console.log(`\nLoad average while measuring (1, 5, 15 min) at the end: ${os.loadavg().map((x) => x.toFixed(2)).join(", ")} on ${os.cpus().length} cores.`);
-console.log(`\nTargets: two workers >= 35% of pdftotext: ${c2.pagesPerSecond / a.pagesPerSecond >= 0.35 ? "met" : "NOT met"}; miner after extraction < 20%: ${minerShare(c2) < 0.2 ? "met" : "NOT met"}; peak < 400 MB on the 300-page PDF: ${big.peakMb < 400 ? "met" : "NOT met"}.`);
+console.log(
+  `| 300-page PDF, 1 worker | ${big.pagesPerSecond.toFixed(1)} | ${longPages} pages, ${big.done ? "done" : "FAILED"}; extraction ${(big.readMs / 1000).toFixed(1)} s, mining after extraction ${(big.mineMs / 1000).toFixed(1)} s, store ${(big.storeMs / 1000).toFixed(1)} s; peak worker RSS ${big.peakMb.toFixed(0)} MB (idle worker ${big.idleMb.toFixed(0)} MB) |`,
+);
+console.log(
+  `\nLoad average while measuring (1, 5, 15 min) at the end: ${os
+    .loadavg()
+    .map((x) => x.toFixed(2))
+    .join(", ")} on ${os.cpus().length} cores.`,
+);
+console.log(
+  `\nTargets: two workers >= 35% of pdftotext: ${c2.pagesPerSecond / a.pagesPerSecond >= 0.35 ? "met" : "NOT met"}; miner after extraction < 20%: ${minerShare(c2) < 0.2 ? "met" : "NOT met"}; peak < 400 MB on the 300-page PDF: ${big.peakMb < 400 ? "met" : "NOT met"}.`,
+);
 fs.rmSync(work, { recursive: true, force: true });
 process.exit(0);

@@ -60,6 +60,9 @@ describe("admin: invite, change role, deactivate", () => {
     await b.page.getByTestId(`person-${email}`).getByRole("button", { name: "Deactivate" }).click();
     await b.page.getByTestId(`person-${email}`).getByText("deactivated").waitFor();
     await passwordSignIn(email, password);
-    await b.page.getByRole("alert").filter({ hasText: /do not match/ }).waitFor();
+    await b.page
+      .getByRole("alert")
+      .filter({ hasText: /do not match/ })
+      .waitFor();
   });
 });

@@ -39,14 +39,18 @@ describe("authorization matrix", () => {
       if (!MATRIX.some((r) => r.file === f && r.method === "PAGE")) missing.push(`${f} PAGE`);
     }
     for (const f of appFiles.filter((f) => f.endsWith("/route.ts"))) {
-      for (const m of exportedMethods(f)) if (!MATRIX.some((r) => r.file === f && r.method === m)) missing.push(`${f} ${m}`);
+      for (const m of exportedMethods(f))
+        if (!MATRIX.some((r) => r.file === f && r.method === m)) missing.push(`${f} ${m}`);
     }
     expect(missing, "add these to tests/authz-matrix/").toEqual([]);
-    for (const r of MATRIX) expect(fs.existsSync(path.join(ROOT, r.file)), `matrix row for missing file ${r.file}`).toBe(true);
+    for (const r of MATRIX)
+      expect(fs.existsSync(path.join(ROOT, r.file)), `matrix row for missing file ${r.file}`).toBe(true);
   });
 
   it("finds no server actions outside the matrix (Echoline writes through route handlers)", () => {
-    const sources = ["app", "components", "lib"].flatMap((d) => walk(path.join(ROOT, d))).filter((f) => /\.(ts|tsx)$/.test(f));
+    const sources = ["app", "components", "lib"]
+      .flatMap((d) => walk(path.join(ROOT, d)))
+      .filter((f) => /\.(ts|tsx)$/.test(f));
     const actions = sources.filter((f) => /^\s*["']use server["']/m.test(fs.readFileSync(path.join(ROOT, f), "utf8")));
     expect(actions, "server actions need matrix rows and a test path; use route handlers instead").toEqual([]);
   });
@@ -86,7 +90,8 @@ describe("authorization matrix", () => {
         expect(res.status, `${role}: never a server error`).toBeLessThan(500);
         if (allowed) {
           expect([401, 403], `${role} should get through`).not.toContain(res.status);
-          if (row.method === "PAGE") expect(res.headers.get("location") ?? "", `${role} sent to sign-in`).not.toMatch(/\/sign-in$/);
+          if (row.method === "PAGE")
+            expect(res.headers.get("location") ?? "", `${role} sent to sign-in`).not.toMatch(/\/sign-in$/);
         } else {
           expect(res.status, `${role} must be refused`).toBe(403);
         }

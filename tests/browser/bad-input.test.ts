@@ -12,13 +12,19 @@ beforeAll(async () => {
 });
 
 const post = (url: string, body: string, cookie = admin, extra: Record<string, string> = {}) =>
-  fetch(`${APP_URL}${url}`, { method: "POST", headers: { cookie, "content-type": "application/json", ...extra }, body });
+  fetch(`${APP_URL}${url}`, {
+    method: "POST",
+    headers: { cookie, "content-type": "application/json", ...extra },
+    body,
+  });
 
 describe("bad input gets a clear JSON error that names the field", () => {
   it("malformed JSON → 400 naming the body", async () => {
     const r = await post("/api/admin/venues", "{not json");
     expect(r.status).toBe(400);
-    expect(await r.json()).toEqual({ error: { code: "invalid", message: expect.stringMatching(/not valid JSON/), field: "body" } });
+    expect(await r.json()).toEqual({
+      error: { code: "invalid", message: expect.stringMatching(/not valid JSON/), field: "body" },
+    });
   });
 
   it("a wrong field → 400 naming that field", async () => {
@@ -48,7 +54,12 @@ describe("bad input gets a clear JSON error that names the field", () => {
         c.close();
       },
     });
-    const r2 = await fetch(`${APP_URL}/api/admin/venues`, { method: "POST", headers: { cookie: admin, "content-type": "application/json" }, body: stream, duplex: "half" } as RequestInit);
+    const r2 = await fetch(`${APP_URL}/api/admin/venues`, {
+      method: "POST",
+      headers: { cookie: admin, "content-type": "application/json" },
+      body: stream,
+      duplex: "half",
+    } as RequestInit);
     expect(r2.status).toBe(413);
   });
 });
@@ -58,7 +69,13 @@ describe("the database being down", () => {
   const port = 3199;
   beforeAll(async () => {
     // The same build, pointed at a port where no PostgreSQL listens.
-    const env = stackEnv({ appPort: port, smtpPort: 2625, mailHttpPort: 2626, databaseUrl: "postgres://postgres@127.0.0.1:1/none", dataDir: path.join(DATA_DIR, "e2e") });
+    const env = stackEnv({
+      appPort: port,
+      smtpPort: 2625,
+      mailHttpPort: 2626,
+      databaseUrl: "postgres://postgres@127.0.0.1:1/none",
+      dataDir: path.join(DATA_DIR, "e2e"),
+    });
     web = spawn("node_modules/.bin/next", ["start", "-H", "127.0.0.1", "-p", String(port)], { env, stdio: "ignore" });
     await waitForHttp(`http://127.0.0.1:${port}/`, 60_000);
   });

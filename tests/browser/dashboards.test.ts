@@ -25,7 +25,13 @@ beforeAll(async () => {
   await refreshSummaries(db);
   // The e2e database may also hold other suites' articles (the demo corpus): keep to the fixture's venues.
   only = `venues=${ids.venues.methods},${ids.venues.applied}`;
-  alpha = (await db.selectFrom("practices").select("id").where("key", "=", "cronbach_alpha-ge-0.7-fixed").executeTakeFirstOrThrow()).id;
+  alpha = (
+    await db
+      .selectFrom("practices")
+      .select("id")
+      .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
+      .executeTakeFirstOrThrow()
+  ).id;
   b = await launchBrowser();
   await signInAs(b.page, "reader");
 });
@@ -36,16 +42,27 @@ afterAll(async () => {
 
 describe("dashboards for a reader", () => {
   it("opens each dashboard with a heading and a table view", async () => {
-    for (const [path, heading] of [["practice-over-time", "Practice over time"], ["trail-ends", "Where trails end"], ["venues", "Venue comparison"], ["drift", "Drift from sources"]]) {
+    for (const [path, heading] of [
+      ["practice-over-time", "Practice over time"],
+      ["trail-ends", "Where trails end"],
+      ["venues", "Venue comparison"],
+      ["drift", "Drift from sources"],
+    ]) {
       await b.page.goto(`${APP_URL}/dashboards/${path}?practice=${alpha}&${only}`);
       await expect(b.page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe(heading);
-      await b.page.getByText(/^Table view:/).first().waitFor();
+      await b.page
+        .getByText(/^Table view:/)
+        .first()
+        .waitFor();
     }
   });
 
   it("keeps a filter in the URL and the numbers follow it", async () => {
     await b.page.goto(`${APP_URL}/dashboards/practice-over-time?practice=${alpha}&${only}`);
-    await b.page.getByText(/^Table view:/).first().click();
+    await b.page
+      .getByText(/^Table view:/)
+      .first()
+      .click();
     // Hand count (fixture): 2019 has 3 eligible articles, 2 asserting.
     await b.page.locator("#table-byYear tbody tr").nth(2).waitFor();
     const row2019 = await b.page.locator("#table-byYear tbody tr").nth(2).locator("td").allTextContents();
@@ -53,15 +70,22 @@ describe("dashboards for a reader", () => {
     await b.page.getByLabel("From year").fill("2019");
     await b.page.getByLabel("From year").blur();
     await b.page.waitForURL(/from=2019/);
-    await b.page.getByText(/^Table view:/).first().click();
+    await b.page
+      .getByText(/^Table view:/)
+      .first()
+      .click();
     await expect(b.page.locator("#table-byYear tbody tr").count()).resolves.toBe(1);
   });
 
   it("downloads a CSV equal to the table", async () => {
-    const r = await b.page.request.get(`${APP_URL}/api/dashboards/trail-ends?practice=${alpha}&${only}&format=csv&table=lengths`);
+    const r = await b.page.request.get(
+      `${APP_URL}/api/dashboards/trail-ends?practice=${alpha}&${only}&format=csv&table=lengths`,
+    );
     expect(r.headers()["content-type"]).toContain("text/csv");
     const csv = Papa.parse<string[]>((await r.text()).trim()).data;
-    const json = (await (await b.page.request.get(`${APP_URL}/api/dashboards/trail-ends?practice=${alpha}&${only}`)).json()) as { tables: { lengths: { rows: { length: number; statements: number }[] } } };
+    const json = (await (
+      await b.page.request.get(`${APP_URL}/api/dashboards/trail-ends?practice=${alpha}&${only}`)
+    ).json()) as { tables: { lengths: { rows: { length: number; statements: number }[] } } };
     expect(csv.slice(1)).toEqual(json.tables.lengths.rows.map((x) => [String(x.length), String(x.statements)]));
   });
 

@@ -29,23 +29,40 @@ async function until<T>(what: string, probe: () => Promise<T | null>, timeoutMs:
 beforeAll(async () => {
   db = createDb(E2E_DATABASE_URL, 2);
   // The e2e worker reads files from the e2e data folder (ECHOLINE_DATA_DIR of tests/setup/app-global.ts).
-  const r = await loadDemoCorpus(db, { count: COUNT, storage: folderStorage(path.join(DATA_DIR, "e2e", "files")), cacheDir: path.join(DATA_DIR, "demo-e2e") });
+  const r = await loadDemoCorpus(db, {
+    count: COUNT,
+    storage: folderStorage(path.join(DATA_DIR, "e2e", "files")),
+    cacheDir: path.join(DATA_DIR, "demo-e2e"),
+  });
   expect(r.created + r.skipped).toBe(COUNT);
   await until(
     "every demo article to be mined",
     async () => {
-      const left = await db.selectFrom("articles").select((eb) => eb.fn.countAll<number>().as("n")).where("is_demo", "=", true).where("status", "not in", ["done", "failed"]).executeTakeFirstOrThrow();
+      const left = await db
+        .selectFrom("articles")
+        .select((eb) => eb.fn.countAll<number>().as("n"))
+        .where("is_demo", "=", true)
+        .where("status", "not in", ["done", "failed"])
+        .executeTakeFirstOrThrow();
       return Number(left.n) === 0 ? true : null;
     },
     240_000,
   );
-  alpha = (await db.selectFrom("practices").select("id").where("key", "=", "cronbach_alpha-ge-0.7-fixed").executeTakeFirstOrThrow()).id;
+  alpha = (
+    await db
+      .selectFrom("practices")
+      .select("id")
+      .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
+      .executeTakeFirstOrThrow()
+  ).id;
   const cookie = await sessionCookie("reader");
   // The graph jobs run after mining; wait until the dashboard the reader opens has their output.
   await until(
     "trails and summaries of the demo corpus",
     async () => {
-      const j = (await (await fetch(`${APP_URL}/api/dashboards/trail-ends?practice=${alpha}`, { headers: { cookie } })).json()) as { tables?: { lengths?: { rows: unknown[] } } };
+      const j = (await (
+        await fetch(`${APP_URL}/api/dashboards/trail-ends?practice=${alpha}`, { headers: { cookie } })
+      ).json()) as { tables?: { lengths?: { rows: unknown[] } } };
       return (j.tables?.lengths?.rows.length ?? 0) > 0 ? true : null;
     },
     240_000,
@@ -61,22 +78,44 @@ afterAll(async () => {
 
 describe("a reader on the demo corpus", () => {
   it("mined every demo PDF without failures", async () => {
-    const failed = await db.selectFrom("articles").select(["original_filename", "failure_message"]).where("is_demo", "=", true).where("status", "=", "failed").execute();
+    const failed = await db
+      .selectFrom("articles")
+      .select(["original_filename", "failure_message"])
+      .where("is_demo", "=", true)
+      .where("status", "=", "failed")
+      .execute();
     expect(failed).toEqual([]);
-    const s = await db.selectFrom("statements").innerJoin("articles", "articles.id", "statements.article_id").select((eb) => eb.fn.countAll<number>().as("n")).where("articles.is_demo", "=", true).where("statements.kind", "=", "threshold").executeTakeFirstOrThrow();
+    const s = await db
+      .selectFrom("statements")
+      .innerJoin("articles", "articles.id", "statements.article_id")
+      .select((eb) => eb.fn.countAll<number>().as("n"))
+      .where("articles.is_demo", "=", true)
+      .where("statements.kind", "=", "threshold")
+      .executeTakeFirstOrThrow();
     expect(Number(s.n)).toBeGreaterThan(COUNT);
   });
 
   it("opens practice over time, filters by venue in the URL, and downloads its CSV", async () => {
     await b.page.goto(`${APP_URL}/dashboards/practice-over-time?practice=${alpha}`);
-    await b.page.getByText(/^Table view:/).first().click();
+    await b.page
+      .getByText(/^Table view:/)
+      .first()
+      .click();
     const rows = b.page.locator("#table-byYear tbody tr");
     await rows.first().waitFor();
     expect(await rows.count()).toBeGreaterThan(3);
-    const venue = await db.selectFrom("venues").innerJoin("articles", "articles.venue_id", "venues.id").select("venues.id").where("articles.is_demo", "=", true).where("venues.is_methods_venue", "=", false).executeTakeFirstOrThrow();
+    const venue = await db
+      .selectFrom("venues")
+      .innerJoin("articles", "articles.venue_id", "venues.id")
+      .select("venues.id")
+      .where("articles.is_demo", "=", true)
+      .where("venues.is_methods_venue", "=", false)
+      .executeTakeFirstOrThrow();
     await b.page.goto(`${APP_URL}/dashboards/practice-over-time?practice=${alpha}&venues=${venue.id}`);
     expect(new URL(b.page.url()).searchParams.get("venues")).toBe(venue.id);
-    const csv = await b.page.request.get(`${APP_URL}/api/dashboards/practice-over-time?practice=${alpha}&venues=${venue.id}&format=csv&table=byYear`);
+    const csv = await b.page.request.get(
+      `${APP_URL}/api/dashboards/practice-over-time?practice=${alpha}&venues=${venue.id}&format=csv&table=byYear`,
+    );
     expect(csv.status()).toBe(200);
     expect(csv.headers()["content-type"]).toContain("text/csv");
     expect((await csv.text()).split("\n").length).toBeGreaterThan(1);

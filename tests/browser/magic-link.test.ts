@@ -47,7 +47,9 @@ describe("magic-link sign-in through the mail fake", () => {
     const link = linkIn((await waitForMail(email, t)).text);
     const c = new pg.Client({ connectionString: E2E_DATABASE_URL });
     await c.connect();
-    await c.query(`update "VerificationToken" set expires = now() - interval '1 minute' where identifier = $1`, [email]);
+    await c.query(`update "VerificationToken" set expires = now() - interval '1 minute' where identifier = $1`, [
+      email,
+    ]);
     await c.end();
     await b.page.goto(link);
     await expect(b.page.getByTestId("link-state").getAttribute("data-state")).resolves.toBe("expired");

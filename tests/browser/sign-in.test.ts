@@ -75,7 +75,19 @@ describe("sign-in through the real UI", () => {
     // An account of this test's own, so the lock-out does not spill into other suites.
     const email = "locked.out@echoline.local";
     const db = createDb(E2E_DATABASE_URL, 1);
-    await db.insertInto("User").values({ email, name: "Lock-out Test", role: "reader", password_hash: await hashPassword("the-right-password"), emailVerified: null, image: null, deactivated_at: null }).onConflict((oc) => oc.doNothing()).execute();
+    await db
+      .insertInto("User")
+      .values({
+        email,
+        name: "Lock-out Test",
+        role: "reader",
+        password_hash: await hashPassword("the-right-password"),
+        emailVerified: null,
+        image: null,
+        deactivated_at: null,
+      })
+      .onConflict((oc) => oc.doNothing())
+      .execute();
     await db.destroy();
     let last = "";
     for (let i = 0; i < 7; i++) {
@@ -93,7 +105,10 @@ describe("sign-in through the real UI", () => {
     const answered = b.page.waitForResponse((r) => r.url().includes("/api/auth/callback/credentials"));
     await b.page.getByRole("button", { name: "Sign in", exact: true }).click();
     await answered;
-    await b.page.getByRole("alert").filter({ hasText: /Too many attempts/ }).waitFor();
+    await b.page
+      .getByRole("alert")
+      .filter({ hasText: /Too many attempts/ })
+      .waitFor();
     expect(new URL(b.page.url()).pathname).toBe("/sign-in");
   });
 

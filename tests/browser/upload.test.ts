@@ -22,12 +22,18 @@ describe("upload through the browser", () => {
     // A marker on window: if the page reloaded while waiting, it would be gone.
     await page.evaluate(() => ((window as unknown as { __noReload: number }).__noReload = 1));
     const pdf = Buffer.from(await goodPdf());
-    await page.getByLabel("Article files").setInputFiles({ name: "ward-climate.pdf", mimeType: "application/pdf", buffer: pdf });
+    await page
+      .getByLabel("Article files")
+      .setInputFiles({ name: "ward-climate.pdf", mimeType: "application/pdf", buffer: pdf });
     await expect.poll(() => page.getByTestId("upload-row").count()).toBe(1);
     await page.getByRole("button", { name: /^Upload/ }).click();
     const status = page.getByTestId("upload-status").first();
     // Waits on the page's own polling; the assertion fails if it never gets there.
-    await page.waitForFunction(() => /^(Done|Failed|Refused)/.test(document.querySelector('[data-testid="upload-status"]')?.textContent ?? ""), null, { timeout: 90_000 });
+    await page.waitForFunction(
+      () => /^(Done|Failed|Refused)/.test(document.querySelector('[data-testid="upload-status"]')?.textContent ?? ""),
+      null,
+      { timeout: 90_000 },
+    );
     expect(await status.textContent()).toMatch(/^Done/);
     expect(await page.getByTestId("batch-counts").textContent()).toContain("1 of 1 finished · 1 done · 0 failed");
     expect(await page.evaluate(() => (window as unknown as { __noReload?: number }).__noReload)).toBe(1);

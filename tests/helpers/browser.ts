@@ -10,11 +10,24 @@ export const MAIL_URL = "http://127.0.0.1:2626";
 export const E2E_DATABASE_URL = "postgres://postgres@127.0.0.1:54321/echoline_e2e";
 
 // Launch flags for Debian's Chromium on this closed network (no background connections).
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const ARGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
 
 export async function launchBrowser(): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "echoline-chromium-"));
-  const context = await chromium.launchPersistentContext(dir, { executablePath: "/usr/bin/chromium", args: ARGS, viewport: { width: 1280, height: 900 } });
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: "/usr/bin/chromium",
+    args: ARGS,
+    viewport: { width: 1280, height: 900 },
+  });
   const page = context.pages()[0] ?? (await context.newPage());
   return {
     context,
@@ -73,7 +86,8 @@ export async function followTrailToSentence(page: Page, dashboardUrl: string): P
   const sentence = page.getByRole("list", { name: "Trail steps" }).locator('a[href^="/articles/"]').first();
   await sentence.waitFor();
   const href = (await sentence.getAttribute("href")) ?? "";
-  if (!/^\/articles\/[0-9a-f-]{36}#statement-[0-9a-f-]{36}$/.test(href)) throw new Error(`unexpected sentence link ${href}`);
+  if (!/^\/articles\/[0-9a-f-]{36}#statement-[0-9a-f-]{36}$/.test(href))
+    throw new Error(`unexpected sentence link ${href}`);
   await sentence.click();
   await page.waitForURL(/\/articles\/[0-9a-f-]{36}/);
   const anchor = page.locator(`[id="${href.split("#")[1]}"]`);

@@ -13,7 +13,8 @@ export async function signInOverHttp(base: string, email: string, password: stri
     body: new URLSearchParams({ email, password, csrfToken, callbackUrl: `${base}/home` }),
   });
   const all = [jar, cookiesOf(res)].filter(Boolean).join("; ");
-  if (!/authjs\.session-token=/.test(all)) throw new Error(`sign-in as ${email} gave no session cookie (status ${res.status})`);
+  if (!/authjs\.session-token=/.test(all))
+    throw new Error(`sign-in as ${email} gave no session cookie (status ${res.status})`);
   return all;
 }
 

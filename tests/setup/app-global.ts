@@ -27,7 +27,14 @@ export default async function setup() {
   await admin.end();
   const dataDir = path.join(DATA_DIR, "e2e");
   fs.rmSync(dataDir, { recursive: true, force: true });
-  const cfg = { appPort: E2E.appPort, smtpPort: E2E.smtpPort, mailHttpPort: E2E.mailHttpPort, databaseUrl: databaseUrl("test", E2E.database), dataDir, quiet: true };
+  const cfg = {
+    appPort: E2E.appPort,
+    smtpPort: E2E.smtpPort,
+    mailHttpPort: E2E.mailHttpPort,
+    databaseUrl: databaseUrl("test", E2E.database),
+    dataDir,
+    quiet: true,
+  };
   Object.assign(process.env, stackEnv(cfg));
   const db = createDb(cfg.databaseUrl, 2);
   await migrateToLatest(db as unknown as Kysely<unknown>);

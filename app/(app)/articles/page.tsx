@@ -8,7 +8,11 @@ import { STATUS_LABEL } from "@/components/upload/status";
 
 export const metadata = { title: "Articles" };
 
-export default async function ArticlesPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function ArticlesPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const actor = await requirePage("corpus:read");
   const sp = await searchParams;
   const raw = Object.fromEntries(Object.entries(sp).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]));
@@ -31,7 +35,11 @@ export default async function ArticlesPage({ searchParams }: { searchParams: Pro
         </label>
         <label className="grid gap-1 text-sm">
           <span>Status</span>
-          <select name="status" defaultValue={filters.status ?? ""} className="rounded border border-rule bg-paper px-2 py-1">
+          <select
+            name="status"
+            defaultValue={filters.status ?? ""}
+            className="rounded border border-rule bg-paper px-2 py-1"
+          >
             <option value="">Any</option>
             {ARTICLE_STATUSES.map((s) => (
               <option key={s} value={s}>
@@ -42,7 +50,11 @@ export default async function ArticlesPage({ searchParams }: { searchParams: Pro
         </label>
         <label className="grid gap-1 text-sm">
           <span>Venue</span>
-          <select name="venue" defaultValue={filters.venue ?? ""} className="rounded border border-rule bg-paper px-2 py-1">
+          <select
+            name="venue"
+            defaultValue={filters.venue ?? ""}
+            className="rounded border border-rule bg-paper px-2 py-1"
+          >
             <option value="">Any</option>
             {venues.map((v) => (
               <option key={v.id} value={v.id}>
@@ -53,18 +65,36 @@ export default async function ArticlesPage({ searchParams }: { searchParams: Pro
         </label>
         <label className="grid gap-1 text-sm">
           <span>Year</span>
-          <input name="year" inputMode="numeric" defaultValue={filters.year ?? ""} className="w-24 rounded border border-rule bg-paper px-2 py-1" />
+          <input
+            name="year"
+            inputMode="numeric"
+            defaultValue={filters.year ?? ""}
+            className="w-24 rounded border border-rule bg-paper px-2 py-1"
+          />
         </label>
         <button className="rounded bg-ink px-3 py-1.5 text-paper">Filter</button>
-        {filtered && <Link href="/articles" className="text-sm underline">Clear filters</Link>}
+        {filtered && (
+          <Link href="/articles" className="text-sm underline">
+            Clear filters
+          </Link>
+        )}
       </form>
-      {!parsed.success && <p className="text-accent" role="alert">Some filters were not understood and were ignored.</p>}
+      {!parsed.success && (
+        <p className="text-accent" role="alert">
+          Some filters were not understood and were ignored.
+        </p>
+      )}
       {articles.length === 0 ? (
         filtered ? (
           <EmptyState title="No article matches these filters">Loosen a filter or clear them all.</EmptyState>
         ) : (
-          <EmptyState title="The corpus is empty" action={can(actor, "corpus:upload") ? { href: "/upload", label: "Upload articles" } : undefined}>
-            {can(actor, "corpus:upload") ? "Upload PDFs, JATS XML or text files to start mining." : "A curator has not loaded any articles yet."}
+          <EmptyState
+            title="The corpus is empty"
+            action={can(actor, "corpus:upload") ? { href: "/upload", label: "Upload articles" } : undefined}
+          >
+            {can(actor, "corpus:upload")
+              ? "Upload PDFs, JATS XML or text files to start mining."
+              : "A curator has not loaded any articles yet."}
           </EmptyState>
         )
       ) : (
@@ -86,13 +116,17 @@ export default async function ArticlesPage({ searchParams }: { searchParams: Pro
                     {a.title ?? a.original_filename}
                   </Link>
                   {a.is_demo && <span className="ml-2 text-xs text-ink-2">(invented demo)</span>}
-                  {!a.licence && a.status === "done" && <span className="ml-2 text-xs text-accent">licence missing</span>}
+                  {!a.licence && a.status === "done" && (
+                    <span className="ml-2 text-xs text-accent">licence missing</span>
+                  )}
                 </td>
                 <td className="py-1.5 pr-3">{a.venue ?? "—"}</td>
                 <td className="py-1.5 pr-3 tabular-nums">{a.year ?? "—"}</td>
                 <td className="py-1.5 pr-3">
                   {STATUS_LABEL[a.status]}
-                  {a.status === "failed" && a.failure_message && <span className="block text-xs text-ink-2">{a.failure_message}</span>}
+                  {a.status === "failed" && a.failure_message && (
+                    <span className="block text-xs text-ink-2">{a.failure_message}</span>
+                  )}
                 </td>
                 <td className="py-1.5 text-right tabular-nums">{a.statements}</td>
               </tr>

@@ -19,7 +19,10 @@ export default async function HomePage() {
       sql<number>`count(*) filter (where status not in ('done','failed'))`.as("pending"),
     ])
     .executeTakeFirstOrThrow();
-  const statements = await db.selectFrom("statements").select(sql<number>`count(*)`.as("n")).executeTakeFirstOrThrow();
+  const statements = await db
+    .selectFrom("statements")
+    .select(sql<number>`count(*)`.as("n"))
+    .executeTakeFirstOrThrow();
   const venues = actor.venueIds.length
     ? await db.selectFrom("venues").select(["id", "name"]).where("id", "in", actor.venueIds).execute()
     : [];
@@ -46,7 +49,8 @@ export default async function HomePage() {
       {Number(counts.articles) === 0 ? (
         can(actor, "corpus:upload") ? (
           <EmptyState title="The corpus is empty" action={{ href: "/upload", label: "Upload articles" }}>
-            Upload open-access PDFs or JATS XML (with a BibTeX, RIS or CSV metadata file if you have one). Mining starts at once.
+            Upload open-access PDFs or JATS XML (with a BibTeX, RIS or CSV metadata file if you have one). Mining starts
+            at once.
           </EmptyState>
         ) : (
           <EmptyState title="The corpus is empty">
@@ -55,25 +59,59 @@ export default async function HomePage() {
         )
       ) : (
         <section aria-labelledby="next-h" className="grid gap-3">
-          <h2 id="next-h" className="font-semibold text-lg">Next steps</h2>
+          <h2 id="next-h" className="font-semibold text-lg">
+            Next steps
+          </h2>
           <ul className="grid gap-2 sm:grid-cols-2">
-            <li><Link className="underline" href="/dashboards">See how practices spread over time</Link></li>
-            <li><Link className="underline" href="/articles">Browse the mined articles</Link></li>
-            {can(actor, "corpus:upload") && <li><Link className="underline" href="/upload">Upload more articles</Link></li>}
-            {Number(counts.failed) > 0 && can(actor, "corpus:curate") && (
-              <li><Link className="underline" href="/articles?status=failed">{Number(counts.failed)} articles failed to mine: see why</Link></li>
+            <li>
+              <Link className="underline" href="/dashboards">
+                See how practices spread over time
+              </Link>
+            </li>
+            <li>
+              <Link className="underline" href="/articles">
+                Browse the mined articles
+              </Link>
+            </li>
+            {can(actor, "corpus:upload") && (
+              <li>
+                <Link className="underline" href="/upload">
+                  Upload more articles
+                </Link>
+              </li>
             )}
-            {can(actor, "admin:users") && <li><Link className="underline" href="/admin/people">Invite people</Link></li>}
+            {Number(counts.failed) > 0 && can(actor, "corpus:curate") && (
+              <li>
+                <Link className="underline" href="/articles?status=failed">
+                  {Number(counts.failed)} articles failed to mine: see why
+                </Link>
+              </li>
+            )}
+            {can(actor, "admin:users") && (
+              <li>
+                <Link className="underline" href="/admin/people">
+                  Invite people
+                </Link>
+              </li>
+            )}
           </ul>
         </section>
       )}
       {actor.role === "editor" && (
         <section aria-labelledby="venues-h">
-          <h2 id="venues-h" className="font-semibold text-lg">Your venues</h2>
+          <h2 id="venues-h" className="font-semibold text-lg">
+            Your venues
+          </h2>
           {venues.length ? (
-            <ul className="mt-2 list-disc pl-5">{venues.map((v) => <li key={v.id}>{v.name}</li>)}</ul>
+            <ul className="mt-2 list-disc pl-5">
+              {venues.map((v) => (
+                <li key={v.id}>{v.name}</li>
+              ))}
+            </ul>
           ) : (
-            <p className="mt-2 text-ink-2">You are not linked to a venue yet. Ask an admin to link you to your journal.</p>
+            <p className="mt-2 text-ink-2">
+              You are not linked to a venue yet. Ask an admin to link you to your journal.
+            </p>
           )}
         </section>
       )}

@@ -21,11 +21,17 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       {problem || !inv ? (
         <>
           <p className="mt-3">{problem}</p>
-          <p className="mt-6"><Link className="underline" href="/sign-in">Go to sign-in</Link></p>
+          <p className="mt-6">
+            <Link className="underline" href="/sign-in">
+              Go to sign-in
+            </Link>
+          </p>
         </>
       ) : (
         <>
-          <p className="mt-3">You were invited as <strong>{inv.role}</strong> with {inv.email}. Choose your name and a password.</p>
+          <p className="mt-3">
+            You were invited as <strong>{inv.role}</strong> with {inv.email}. Choose your name and a password.
+          </p>
           <AcceptInvitationForm token={token} />
         </>
       )}

@@ -14,7 +14,11 @@ export default async function SignInProblemPage({ searchParams }: { searchParams
     <main id="main" className="mx-auto w-full max-w-md px-4 py-12">
       <h1 className="font-serif text-3xl font-semibold">Could not sign you in</h1>
       <p className="mt-3">{WORDS[error ?? ""] ?? "Something went wrong while signing you in. Try again."}</p>
-      <p className="mt-6"><Link href="/sign-in" className="underline">Back to sign-in</Link></p>
+      <p className="mt-6">
+        <Link href="/sign-in" className="underline">
+          Back to sign-in
+        </Link>
+      </p>
     </main>
   );
 }

@@ -25,14 +25,33 @@ beforeAll(async () => {
   db = t.db;
   await seedPractices(db);
   ids = await loadFixture(db);
-  alpha = (await db.selectFrom("practices").select("id").where("key", "=", "cronbach_alpha-ge-0.7-fixed").executeTakeFirstOrThrow()).id;
+  alpha = (
+    await db
+      .selectFrom("practices")
+      .select("id")
+      .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
+      .executeTakeFirstOrThrow()
+  ).id;
   const deps: GraphJobDeps = { db: () => db, send: async (name, data) => void sent.push({ name, data }) };
   // Mining order M, A2, A1: A2 cites A1 before A1 is in the corpus.
   for (const k of ["M", "A2", "A1", "A3", "A4", "A5", "A6"]) await handleResolve(deps, { articleId: ids.articles[k] });
   // The re-checks the jobs asked for, as the worker would run them.
-  for (const s of sent.filter((x) => x.name === GRAPH_QUEUES.resolve)) await handleResolve(deps, s.data as { articleId: string; recheck: boolean });
-  const mWork = await db.selectFrom("works").select("id").where("article_id", "=", ids.articles.M).executeTakeFirstOrThrow();
-  await recordSourceCheck(db, { workId: mWork.id, practiceId: alpha, verdict: "says_so", page: "12", quote: "values of .80 or above", statedValue: 0.8, checkedBy: null });
+  for (const s of sent.filter((x) => x.name === GRAPH_QUEUES.resolve))
+    await handleResolve(deps, s.data as { articleId: string; recheck: boolean });
+  const mWork = await db
+    .selectFrom("works")
+    .select("id")
+    .where("article_id", "=", ids.articles.M)
+    .executeTakeFirstOrThrow();
+  await recordSourceCheck(db, {
+    workId: mWork.id,
+    practiceId: alpha,
+    verdict: "says_so",
+    page: "12",
+    quote: "values of .80 or above",
+    statedValue: 0.8,
+    checkedBy: null,
+  });
   await rebuildAllTrails(db);
   await refreshSummaries(db);
 });
@@ -40,7 +59,12 @@ afterAll(async () => t?.drop());
 
 describe("reference resolution over the fixture", () => {
   it("resolves by DOI (case-insensitive) to the corpus article M", async () => {
-    const r = await db.selectFrom("references as r").innerJoin("works as w", "w.id", "r.work_id").select("w.article_id").where("r.article_id", "=", ids.articles.A1).executeTakeFirstOrThrow();
+    const r = await db
+      .selectFrom("references as r")
+      .innerJoin("works as w", "w.id", "r.work_id")
+      .select("w.article_id")
+      .where("r.article_id", "=", ids.articles.A1)
+      .executeTakeFirstOrThrow();
     expect(r.article_id).toBe(ids.articles.M);
   });
   it("makes the two citations of the same invented book one work, typed methods source by its kind", async () => {
@@ -48,19 +72,37 @@ describe("reference resolution over the fixture", () => {
     expect(books).toHaveLength(2);
     expect(books[0].work_id).not.toBeNull();
     expect(books[0].work_id).toBe(books[1].work_id);
-    const w = await db.selectFrom("works").select(["work_type", "type_decided_by"]).where("id", "=", books[0].work_id!).executeTakeFirstOrThrow();
+    const w = await db
+      .selectFrom("works")
+      .select(["work_type", "type_decided_by"])
+      .where("id", "=", books[0].work_id!)
+      .executeTakeFirstOrThrow();
     expect(w).toEqual({ work_type: "methods_source", type_decided_by: "reference_kind" });
   });
   it("re-runs for A2 when A1 arrives, and A2's reference now leads to A1", async () => {
-    expect(sent.some((s) => s.name === GRAPH_QUEUES.resolve && (s.data as { articleId: string }).articleId === ids.articles.A2)).toBe(true);
-    const r = await db.selectFrom("references as r").innerJoin("works as w", "w.id", "r.work_id").select("w.article_id").where("r.article_id", "=", ids.articles.A2).where("r.kind", "=", "article").executeTakeFirstOrThrow();
+    expect(
+      sent.some(
+        (s) => s.name === GRAPH_QUEUES.resolve && (s.data as { articleId: string }).articleId === ids.articles.A2,
+      ),
+    ).toBe(true);
+    const r = await db
+      .selectFrom("references as r")
+      .innerJoin("works as w", "w.id", "r.work_id")
+      .select("w.article_id")
+      .where("r.article_id", "=", ids.articles.A2)
+      .where("r.kind", "=", "article")
+      .executeTakeFirstOrThrow();
     expect(r.article_id).toBe(ids.articles.A1);
   });
 });
 
 describe("trails", () => {
   it("ends where the hand-traced chains end", async () => {
-    const rows = await db.selectFrom("trails").select(["statement_id", "end_kind", "length", "supported"]).where("practice_id", "=", alpha).execute();
+    const rows = await db
+      .selectFrom("trails")
+      .select(["statement_id", "end_kind", "length", "supported"])
+      .where("practice_id", "=", alpha)
+      .execute();
     const by = Object.fromEntries(rows.map((r) => [r.statement_id, r]));
     // M → book (methods source); A1 → M (methods venue); A2 → A1 (asserts) → M; A3 cites nothing.
     expect(by[ids.statements["M.0"]]).toMatchObject({ end_kind: "methods_source", length: 1 });
@@ -74,7 +116,12 @@ describe("trails", () => {
     const hrefs = v!.nodes.map((n) => n.href);
     expect(hrefs).toContain(`/articles/${ids.articles.A2}#statement-${ids.statements["A2.0"]}`);
     expect(hrefs).toContain(`/articles/${ids.articles.A1}#statement-${ids.statements["A1.0"]}`);
-    expect(v!.edges.filter((e) => e.kind === "cites").map((e) => e.locator).sort()).toEqual([null, "p. 12"]);
+    expect(
+      v!.edges
+        .filter((e) => e.kind === "cites")
+        .map((e) => e.locator)
+        .sort(),
+    ).toEqual([null, "p. 12"]);
   });
 });
 
@@ -83,7 +130,15 @@ describe("dashboards equal a hand count", () => {
     const d = await dashboardData(db, "practice-over-time", { practice: alpha });
     // 2010: M (1 article, asserts, cited no locator). 2018: A1 (A5 failed, not eligible).
     // 2019: A2, A3, A4 (A6 has no licence): A2 no locator, A3 unsourced.
-    const rows = d.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting, r.cited_with_locator, r.cited_no_locator, r.secondary_only, r.unsourced]);
+    const rows = d.tables.byYear.rows.map((r) => [
+      r.year,
+      r.articles,
+      r.asserting,
+      r.cited_with_locator,
+      r.cited_no_locator,
+      r.secondary_only,
+      r.unsourced,
+    ]);
     expect(rows).toEqual([
       [2010, 1, 1, 0, 1, 0, 0],
       [2018, 1, 1, 1, 0, 0, 0],
@@ -93,7 +148,11 @@ describe("dashboards equal a hand count", () => {
     expect(d.notes[0]).toMatch(/Cochran–Armitage/);
   });
   it("filters by venue and years", async () => {
-    const d = await dashboardData(db, "practice-over-time", { practice: alpha, venues: [ids.venues.methods], from: 2011 });
+    const d = await dashboardData(db, "practice-over-time", {
+      practice: alpha,
+      venues: [ids.venues.methods],
+      from: 2011,
+    });
     // Methods venue from 2011 on: A4 only (2019), asserting nothing.
     expect(d.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting])).toEqual([[2019, 1, 0]]);
   });
@@ -105,7 +164,11 @@ describe("dashboards equal a hand count", () => {
       [2019, 2, 1, 1],
     ]);
     // Lengths: A3 0; M 1; A1 1; A2 2.
-    expect(d.tables.lengths.rows).toEqual([{ length: 0, statements: 1 }, { length: 1, statements: 2 }, { length: 2, statements: 1 }]);
+    expect(d.tables.lengths.rows).toEqual([
+      { length: 0, statements: 1 },
+      { length: 1, statements: 2 },
+      { length: 2, statements: 1 },
+    ]);
     // Three works cited once each (book by M; M by A1 with "p. 12"; A1 by A2): locator rate 1 of 3 overall.
     expect(d.tables.sources.rows).toHaveLength(3);
     expect(d.tables.sources.rows.reduce((s, r) => s + Number(r.with_locator), 0)).toBe(1);
@@ -116,7 +179,13 @@ describe("dashboards equal a hand count", () => {
     // Methods venue: M, A4 eligible; M asserts; M cites an outside book. Applied: A1, A2, A3 all
     // assert; citations A1→M (other venue) and A2→A1 (same venue).
     expect(by[ids.venues.methods]).toMatchObject({ articles: 2, asserting: 1, citations: 1, in_venue: 0 });
-    expect(by[ids.venues.applied]).toMatchObject({ articles: 3, asserting: 3, citations: 2, in_venue: 1, in_venue_share: 0.5 });
+    expect(by[ids.venues.applied]).toMatchObject({
+      articles: 3,
+      asserting: 3,
+      citations: 2,
+      in_venue: 1,
+      in_venue_share: 0.5,
+    });
     expect(by[ids.venues.applied].rate_vs_rest).toBeCloseTo(1 - 0.5, 4);
   });
   it("drift lists A1, whose .70 differs from the .80 its checked source states", async () => {
@@ -129,7 +198,9 @@ describe("dashboards equal a hand count", () => {
       for (const [table, t] of Object.entries(d.tables)) {
         const parsed = Papa.parse<string[]>(dashboardCsv(d, table).body.trim(), { skipEmptyLines: false });
         expect(parsed.data[0]).toEqual(t.columns);
-        expect(parsed.data.slice(1)).toEqual(t.rows.map((r) => t.columns.map((c) => (r[c] === null || r[c] === undefined ? "" : String(r[c])))));
+        expect(parsed.data.slice(1)).toEqual(
+          t.rows.map((r) => t.columns.map((c) => (r[c] === null || r[c] === undefined ? "" : String(r[c])))),
+        );
       }
     }
   });
@@ -140,7 +211,11 @@ describe("dashboards read the roll-ups and still equal a hand count under every 
     // Every fixture statement is framed "fixed", so under "contextual": articles as before
     // (2010: 1, 2018: 1, 2019: 3), none asserting; no trail ends, no sources; no venue citations.
     const pot = await dashboardData(db, "practice-over-time", { practice: alpha, framing: "contextual" });
-    expect(pot.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting])).toEqual([[2010, 1, 0], [2018, 1, 0], [2019, 3, 0]]);
+    expect(pot.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting])).toEqual([
+      [2010, 1, 0],
+      [2018, 1, 0],
+      [2019, 3, 0],
+    ]);
     const te = await dashboardData(db, "trail-ends", { practice: alpha, framing: "contextual" });
     expect(te.tables.ends.rows).toEqual([]);
     expect(te.tables.sources.rows).toEqual([]);
@@ -151,7 +226,11 @@ describe("dashboards read the roll-ups and still equal a hand count under every 
   });
   it("the framing every statement has gives the unfiltered hand counts", async () => {
     const te = await dashboardData(db, "trail-ends", { practice: alpha, framing: "fixed" });
-    expect(te.tables.ends.rows.map((r) => [r.year, r.statements, r.methods_source, r.no_citation])).toEqual([[2010, 1, 1, 0], [2018, 1, 1, 0], [2019, 2, 1, 1]]);
+    expect(te.tables.ends.rows.map((r) => [r.year, r.statements, r.methods_source, r.no_citation])).toEqual([
+      [2010, 1, 1, 0],
+      [2018, 1, 1, 0],
+      [2019, 2, 1, 1],
+    ]);
     expect(te.tables.sources.rows).toHaveLength(3);
     const v = await dashboardData(db, "venues", { practice: alpha, framing: "fixed" });
     const by = Object.fromEntries(v.tables.venues.rows.map((r) => [r.venue_id, r]));
@@ -162,7 +241,11 @@ describe("dashboards read the roll-ups and still equal a hand count under every 
     const fast = await dashboardData(db, "trail-ends", { practice: alpha });
     const slow = await dashboardData(db, "trail-ends", { practice: alpha, from: 1900, to: 2100 });
     expect(slow.tables.sources.rows).toEqual(fast.tables.sources.rows);
-    expect(fast.tables.sources.rows.map((r) => [r.citations, r.with_locator]).sort()).toEqual([[1, 0], [1, 0], [1, 1]]);
+    expect(fast.tables.sources.rows.map((r) => [r.citations, r.with_locator]).sort()).toEqual([
+      [1, 0],
+      [1, 0],
+      [1, 1],
+    ]);
     const g1 = await dashboardData(db, "trail-graph", { practice: alpha });
     const g2 = await dashboardData(db, "trail-graph", { practice: alpha, from: 1900, to: 2100 });
     expect(g2.tables.edges.rows).toEqual(g1.tables.edges.rows);
@@ -172,7 +255,9 @@ describe("dashboards read the roll-ups and still equal a hand count under every 
   });
   it("a year window keeps only its articles (2018 only: A1, asserting with a locator)", async () => {
     const pot = await dashboardData(db, "practice-over-time", { practice: alpha, from: 2018, to: 2018 });
-    expect(pot.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting, r.cited_with_locator])).toEqual([[2018, 1, 1, 1]]);
+    expect(pot.tables.byYear.rows.map((r) => [r.year, r.articles, r.asserting, r.cited_with_locator])).toEqual([
+      [2018, 1, 1, 1],
+    ]);
     const te = await dashboardData(db, "trail-ends", { practice: alpha, from: 2018, to: 2018 });
     expect(te.tables.sources.rows.map((r) => [r.citations, r.with_locator])).toEqual([[1, 1]]);
   });
@@ -206,10 +291,31 @@ describe("in-venue precedent counts only the venue's own earlier articles", () =
 
 describe("curator merge and split", () => {
   it("merging moves references and the graph follows; splitting undoes it", async () => {
-    const a = await db.insertInto("works").values({ doi: null, title: "Invented duplicate", normalised_title: null, first_author: "x", year: "2001", article_id: null, merged_into: null }).returning("id").executeTakeFirstOrThrow();
-    const bookRefs = await db.selectFrom("references").select(["id", "work_id"]).where("kind", "=", "book").orderBy("id").execute();
+    const a = await db
+      .insertInto("works")
+      .values({
+        doi: null,
+        title: "Invented duplicate",
+        normalised_title: null,
+        first_author: "x",
+        year: "2001",
+        article_id: null,
+        merged_into: null,
+      })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    const bookRefs = await db
+      .selectFrom("references")
+      .select(["id", "work_id"])
+      .where("kind", "=", "book")
+      .orderBy("id")
+      .execute();
     await splitWork(db, bookRefs[0].work_id!, [bookRefs[0].id]);
-    const after = await db.selectFrom("references").select("work_id").where("id", "=", bookRefs[0].id).executeTakeFirstOrThrow();
+    const after = await db
+      .selectFrom("references")
+      .select("work_id")
+      .where("id", "=", bookRefs[0].id)
+      .executeTakeFirstOrThrow();
     expect(after.work_id).not.toBe(bookRefs[1].work_id);
     await mergeWorks(db, after.work_id!, bookRefs[1].work_id!);
     const back = await db.selectFrom("references").select("work_id").where("kind", "=", "book").execute();
@@ -219,19 +325,40 @@ describe("curator merge and split", () => {
   it("a reference a curator split off a corpus article stays split when resolution runs again", async () => {
     // A2's reference "Brennemann & Adeyemi (2018)" resolves to A1 (fixture). Without the curator's
     // mark, re-resolution prefers the corpus article and would move it straight back to A1.
-    const a1Work = await db.selectFrom("works").select("id").where("article_id", "=", ids.articles.A1).executeTakeFirstOrThrow();
-    const ref = await db.selectFrom("references").select(["id", "work_id"]).where("article_id", "=", ids.articles.A2).where("title", "=", "Brand loyalty in invented coastal towns").executeTakeFirstOrThrow();
+    const a1Work = await db
+      .selectFrom("works")
+      .select("id")
+      .where("article_id", "=", ids.articles.A1)
+      .executeTakeFirstOrThrow();
+    const ref = await db
+      .selectFrom("references")
+      .select(["id", "work_id"])
+      .where("article_id", "=", ids.articles.A2)
+      .where("title", "=", "Brand loyalty in invented coastal towns")
+      .executeTakeFirstOrThrow();
     expect(ref.work_id).toBe(a1Work.id);
     const split = await splitWork(db, a1Work.id, [ref.id]);
     const deps: GraphJobDeps = { db: () => db, send: async () => {} };
     await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
-    const after = await db.selectFrom("references").select(["work_id", "work_set_by"]).where("id", "=", ref.id).executeTakeFirstOrThrow();
+    const after = await db
+      .selectFrom("references")
+      .select(["work_id", "work_set_by"])
+      .where("id", "=", ref.id)
+      .executeTakeFirstOrThrow();
     expect(after).toEqual({ work_id: split, work_set_by: "curator" });
     // The split-off work carries the reference's title, surname and year for later references.
-    expect(await db.selectFrom("works").select(["first_author", "year"]).where("id", "=", split).executeTakeFirstOrThrow()).toEqual({ first_author: "brennemann", year: "2018" });
+    expect(
+      await db.selectFrom("works").select(["first_author", "year"]).where("id", "=", split).executeTakeFirstOrThrow(),
+    ).toEqual({ first_author: "brennemann", year: "2018" });
     // Merging it back puts the reference on A1 again, still as the curator's placement.
     await mergeWorks(db, split, a1Work.id);
     await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
-    expect(await db.selectFrom("references").select(["work_id", "work_set_by"]).where("id", "=", ref.id).executeTakeFirstOrThrow()).toEqual({ work_id: a1Work.id, work_set_by: "curator" });
+    expect(
+      await db
+        .selectFrom("references")
+        .select(["work_id", "work_set_by"])
+        .where("id", "=", ref.id)
+        .executeTakeFirstOrThrow(),
+    ).toEqual({ work_id: a1Work.id, work_set_by: "curator" });
   });
 });

@@ -25,7 +25,11 @@ export const GOOD_PAGES: string[][] = [
   ],
 ];
 
-function render(pages: string[][], options: PDFKit.PDFDocumentOptions = {}, draw?: (doc: PDFKit.PDFDocument) => void): Promise<Uint8Array> {
+function render(
+  pages: string[][],
+  options: PDFKit.PDFDocumentOptions = {},
+  draw?: (doc: PDFKit.PDFDocument) => void,
+): Promise<Uint8Array> {
   return new Promise((resolve, reject) => {
     const doc = new PDFDocument({ autoFirstPage: false, info: { Title: pages[0]?.[0] ?? "Invented" }, ...options });
     const chunks: Buffer[] = [];
@@ -45,11 +49,13 @@ export const goodPdf = () => render(GOOD_PAGES);
 /** Any invented pages as a PDF (one string array per page). */
 export const pdfOf = (pages: string[][]) => render(pages);
 /** pdfkit's standard security handler (RC4/AES with a user password): readers must refuse it. */
-export const encryptedPdf = () => render(GOOD_PAGES, { userPassword: "invented-secret", ownerPassword: "owner", pdfVersion: "1.7" });
+export const encryptedPdf = () =>
+  render(GOOD_PAGES, { userPassword: "invented-secret", ownerPassword: "owner", pdfVersion: "1.7" });
 /** Pages with drawings only, like a scan without OCR. */
 export const imageOnlyPdf = () =>
   render([[], [], []], {}, (doc) => {
-    for (let i = 0; i < 40; i++) doc.rect(60 + (i % 8) * 55, 80 + Math.floor(i / 8) * 90, 40, 60).fill(i % 2 ? "#333" : "#999");
+    for (let i = 0; i < 40; i++)
+      doc.rect(60 + (i % 8) * 55, 80 + Math.floor(i / 8) * 90, 40, 60).fill(i % 2 ? "#333" : "#999");
   });
 
 /**

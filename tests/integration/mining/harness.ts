@@ -8,7 +8,13 @@ import { createTestDatabase } from "@/tests/helpers/db";
 import { memoryStorage, type FileStorage } from "@/lib/storage";
 import { createMiner } from "@/lib/mining";
 import { createIsolatedMiner, type IsolatedMinerOptions } from "@/lib/mining/isolated";
-import { ensureMiningQueue, MINING_QUEUE, MINING_STOPPED_QUEUE, senderFor, type MiningJobData } from "@/lib/corpus/queue";
+import {
+  ensureMiningQueue,
+  MINING_QUEUE,
+  MINING_STOPPED_QUEUE,
+  senderFor,
+  type MiningJobData,
+} from "@/lib/corpus/queue";
 import { queueArticle, sha256Hex } from "@/lib/corpus/ingest";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { createWorkerBoss } from "@/workers/boss";
@@ -49,7 +55,10 @@ export async function startHarness(
   const mem = memoryStorage();
   // The isolated miner takes the buffer it is given over; memoryStorage hands out its own copy, so
   // give the worker a fresh one each time, as folderStorage does by reading the file.
-  const storage: FileStorage = { put: (sha, data) => mem.put(sha, data), get: async (key) => (await mem.get(key)).slice() };
+  const storage: FileStorage = {
+    put: (sha, data) => mem.put(sha, data),
+    get: async (key) => (await mem.get(key)).slice(),
+  };
   const boss = createWorkerBoss(t.url, { superviseIntervalSeconds: 1 });
   await boss.start();
   await ensureMiningQueue(boss, { preset: opts.retry, reconcile: true });
@@ -65,8 +74,16 @@ export async function startHarness(
     log: quietLog,
     beforeCommit: opts.beforeCommit,
   });
-  await boss.work(MINING_QUEUE, { localConcurrency: opts.concurrency ?? 2, perJobResults: true, pollingIntervalSeconds: 0.5 }, mining.handler);
-  await boss.work(MINING_STOPPED_QUEUE, { includeMetadata: true, pollingIntervalSeconds: 0.5 }, (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs));
+  await boss.work(
+    MINING_QUEUE,
+    { localConcurrency: opts.concurrency ?? 2, perJobResults: true, pollingIntervalSeconds: 0.5 },
+    mining.handler,
+  );
+  await boss.work(
+    MINING_STOPPED_QUEUE,
+    { includeMetadata: true, pollingIntervalSeconds: 0.5 },
+    (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs),
+  );
   return {
     db: t.db,
     url: t.url,
@@ -85,13 +102,22 @@ export async function startHarness(
 }
 
 /** Polls until every listed article is done or failed (or the deadline passes). */
-export async function waitForArticles(db: DB, ids: string[], timeoutMs = 90_000): Promise<Map<string, { status: string; failure_code: string | null; failure_message: string | null }>> {
+export async function waitForArticles(
+  db: DB,
+  ids: string[],
+  timeoutMs = 90_000,
+): Promise<Map<string, { status: string; failure_code: string | null; failure_message: string | null }>> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
-    const rows = await db.selectFrom("articles").select(["id", "status", "failure_code", "failure_message"]).where("id", "in", ids).execute();
+    const rows = await db
+      .selectFrom("articles")
+      .select(["id", "status", "failure_code", "failure_message"])
+      .where("id", "in", ids)
+      .execute();
     const finished = rows.filter((r) => r.status === "done" || r.status === "failed");
     if (finished.length === ids.length) return new Map(rows.map((r) => [r.id, r]));
-    if (Date.now() > deadline) throw new Error(`${ids.length - finished.length} of ${ids.length} articles not finished in time`);
+    if (Date.now() > deadline)
+      throw new Error(`${ids.length - finished.length} of ${ids.length} articles not finished in time`);
     await new Promise((r) => setTimeout(r, 200));
   }
 }
@@ -100,13 +126,26 @@ export async function waitForArticles(db: DB, ids: string[], timeoutMs = 90_000)
  * Stores a file and queues it without the upload's type check, as if it had slipped past it: the
  * worker must still fail it cleanly.
  */
-export async function enqueueRaw(h: Harness, data: Uint8Array, filename: string, kind: SourceKind = "pdf"): Promise<string> {
+export async function enqueueRaw(
+  h: Harness,
+  data: Uint8Array,
+  filename: string,
+  kind: SourceKind = "pdf",
+): Promise<string> {
   const sha = sha256Hex(data);
   const key = await h.storage.put(sha, data);
   const boss = await senderFor(h.db);
   return h.db.transaction().execute(async (trx) => {
-    await trx.insertInto("stored_files").values({ sha256: sha, size_bytes: data.length, media_type: "application/octet-stream", storage_key: key }).onConflict((oc) => oc.doNothing()).execute();
-    const a = await trx.insertInto("articles").values({ file_sha256: sha, original_filename: filename, source_kind: kind }).returning("id").executeTakeFirstOrThrow();
+    await trx
+      .insertInto("stored_files")
+      .values({ sha256: sha, size_bytes: data.length, media_type: "application/octet-stream", storage_key: key })
+      .onConflict((oc) => oc.doNothing())
+      .execute();
+    const a = await trx
+      .insertInto("articles")
+      .values({ file_sha256: sha, original_filename: filename, source_kind: kind })
+      .returning("id")
+      .executeTakeFirstOrThrow();
     await queueArticle(trx, boss, a.id, "upload");
     return a.id;
   });
@@ -114,6 +153,18 @@ export async function enqueueRaw(h: Harness, data: Uint8Array, filename: string,
 
 export async function rowCounts(db: DB, ids: string[]) {
   const count = async (table: "statements" | "citations" | "references") =>
-    Number((await db.selectFrom(table).select(sql<number>`count(*)`.as("n")).where("article_id", "in", ids).executeTakeFirstOrThrow()).n);
-  return { statements: await count("statements"), citations: await count("citations"), references: await count("references") };
+    Number(
+      (
+        await db
+          .selectFrom(table)
+          .select(sql<number>`count(*)`.as("n"))
+          .where("article_id", "in", ids)
+          .executeTakeFirstOrThrow()
+      ).n,
+    );
+  return {
+    statements: await count("statements"),
+    citations: await count("citations"),
+    references: await count("references"),
+  };
 }

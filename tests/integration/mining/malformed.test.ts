@@ -32,7 +32,8 @@ async function malformedCases(): Promise<Case[]> {
   // last ~130 bytes only loses the cross-reference table and trailer, which readers rebuild, so
   // such a file is still a good PDF: checked by hand against pdftotext, which reads it too.)
   const span = good.length - 130 - 9;
-  for (let i = 0; i < 110; i++) add({ name: `truncated-${i}.pdf`, data: good.slice(0, 9 + Math.floor((span * i) / 110)) });
+  for (let i = 0; i < 110; i++)
+    add({ name: `truncated-${i}.pdf`, data: good.slice(0, 9 + Math.floor((span * i) / 110)) });
   const r = rng(20261201);
   for (let i = 0; cases.length < 170; i++) add({ name: `flipped-${i}.pdf`, data: flipStreams(good, r) });
   for (let i = 0; i < 25; i++) {
@@ -57,7 +58,8 @@ async function malformedCases(): Promise<Case[]> {
   add({ name: "gigantic-page-count.pdf", data: await hugePageCountPdf(5000) });
   // These never get past the upload's content check; handed to the worker anyway, it must cope.
   add({ name: "zero-length.pdf", data: new Uint8Array(), raw: true });
-  for (let i = 0; i < 5; i++) add({ name: `random-${i}.bin`, data: new Uint8Array(500 + i * 300).map(() => Math.floor(r() * 256)), raw: true });
+  for (let i = 0; i < 5; i++)
+    add({ name: `random-${i}.bin`, data: new Uint8Array(500 + i * 300).map(() => Math.floor(r() * 256)), raw: true });
   return cases;
 }
 
@@ -70,19 +72,27 @@ describe("malformed files through the real worker", () => {
     for (const c of cases) {
       if (c.raw) {
         // The door refuses them first (content decides the type, not the name).
-        await expect(ingestFile(h.db, h.storage, { data: c.data, filename: c.name, uploadedBy: null })).rejects.toBeInstanceOf(IngestError);
+        await expect(
+          ingestFile(h.db, h.storage, { data: c.data, filename: c.name, uploadedBy: null }),
+        ).rejects.toBeInstanceOf(IngestError);
         const id = await enqueueRaw(h, c.data, c.name);
         ids.push(id);
         names.set(id, c.name);
       } else {
-        const { articleId, duplicate } = await ingestFile(h.db, h.storage, { data: c.data, filename: c.name, uploadedBy: null });
+        const { articleId, duplicate } = await ingestFile(h.db, h.storage, {
+          data: c.data,
+          filename: c.name,
+          uploadedBy: null,
+        });
         expect(duplicate).toBe(false);
         ids.push(articleId);
         names.set(articleId, c.name);
       }
     }
     const result = await waitForArticles(h.db, ids, 110_000);
-    const notFailed = [...result.values()].filter((a) => a.status !== "failed").map((a) => names.get((a as { id?: string }).id ?? ""));
+    const notFailed = [...result.values()]
+      .filter((a) => a.status !== "failed")
+      .map((a) => names.get((a as { id?: string }).id ?? ""));
     expect(notFailed).toEqual([]);
     for (const a of result.values()) {
       expect(a.failure_code).toBeTruthy();
@@ -101,11 +111,20 @@ describe("malformed files through the real worker", () => {
     expect(byName.get("zero-length.pdf")!.failure_code).toBe("empty");
 
     // Every status change was recorded: uploaded → queued → reading → failed.
-    const events = await h.db.selectFrom("job_events").select(["state"]).where("article_id", "=", ids[0]).orderBy("id").execute();
+    const events = await h.db
+      .selectFrom("job_events")
+      .select(["state"])
+      .where("article_id", "=", ids[0])
+      .orderBy("id")
+      .execute();
     expect(events.map((e) => e.state)).toEqual(["uploaded", "queued", "reading", "failed"]);
 
     // Still alive: a good PDF after all that is mined.
-    const { articleId } = await ingestFile(h.db, h.storage, { data: await goodPdf(), filename: "good.pdf", uploadedBy: null });
+    const { articleId } = await ingestFile(h.db, h.storage, {
+      data: await goodPdf(),
+      filename: "good.pdf",
+      uploadedBy: null,
+    });
     const good = await waitForArticles(h.db, [articleId]);
     expect(good.get(articleId)!.status).toBe("done");
     expect((await rowCounts(h.db, [articleId])).statements).toBeGreaterThan(0);

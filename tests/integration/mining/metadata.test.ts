@@ -15,7 +15,14 @@ describe("metadata files", () => {
     expect(m.format).toBe("bibtex");
     expect(m.entries).toHaveLength(2);
     const [a, b] = m.entries;
-    expect(a).toMatchObject({ doi: "10.5555/JICS.2019.014", title: "Shift Rhythms and Ward Climate", authors: ["Okafor, Tunde", "Lindqvist, Maren"], year: 2019, venue: "Journal of Invented Care Studies", licence: "CC BY 4.0" });
+    expect(a).toMatchObject({
+      doi: "10.5555/JICS.2019.014",
+      title: "Shift Rhythms and Ward Climate",
+      authors: ["Okafor, Tunde", "Lindqvist, Maren"],
+      year: 2019,
+      venue: "Journal of Invented Care Studies",
+      licence: "CC BY 4.0",
+    });
     expect(a.files).toContain("okafor2019.pdf");
     // A braced name is one literal author in BibTeX (the corporate-author convention).
     expect(b.authors).toEqual(["Brandtner, Kasimir", "Oyelaran Collective"]);
@@ -25,7 +32,13 @@ describe("metadata files", () => {
   it("reads RIS: repeated AU tags, PY with slashes, L1 file name and C5 licence", async () => {
     const m = await parseMetadata(fixture("invented.ris"));
     expect(m.format).toBe("ris");
-    expect(m.entries[0]).toMatchObject({ doi: "10.5555/ir.2008.3", authors: ["Sorensby, Pia", "Tamaru-Welk, Idris"], year: 2008, venue: "Imaginary Review", files: ["sorensby2008.pdf"] });
+    expect(m.entries[0]).toMatchObject({
+      doi: "10.5555/ir.2008.3",
+      authors: ["Sorensby, Pia", "Tamaru-Welk, Idris"],
+      year: 2008,
+      venue: "Imaginary Review",
+      files: ["sorensby2008.pdf"],
+    });
     expect(m.entries[1]).toMatchObject({ title: "Fit indices in invented models", year: 2011, doi: null });
   });
 
@@ -53,7 +66,9 @@ describe("metadata files", () => {
   it("matches by DOI first (case-insensitive), then by file name or its stem", async () => {
     const bib = (await parseMetadata(fixture("invented.bib"))).entries;
     const csv = (await parseMetadata(fixture("invented.csv"))).entries;
-    expect(matchEntry(bib, { filename: "whatever.pdf", doi: "10.5555/jics.2019.014" })?.title).toBe("Shift Rhythms and Ward Climate");
+    expect(matchEntry(bib, { filename: "whatever.pdf", doi: "10.5555/jics.2019.014" })?.title).toBe(
+      "Shift Rhythms and Ward Climate",
+    );
     expect(matchEntry(bib, { filename: "OKAFOR2019.pdf" })?.year).toBe(2019);
     expect(matchEntry(bib, { filename: "brandtner2003.xml" })?.title).toBe("Measuring Invented Constructs");
     expect(matchEntry(csv, { filename: "nkemelu1999.txt" })?.licence).toBe("CC0 1.0");

@@ -38,7 +38,11 @@ afterAll(async () => {
   fs.rmSync(filesDir, { recursive: true, force: true });
 });
 
-type Worker = { child: ChildProcess; output: () => string; exited: Promise<{ code: number | null; signal: NodeJS.Signals | null }> };
+type Worker = {
+  child: ChildProcess;
+  output: () => string;
+  exited: Promise<{ code: number | null; signal: NodeJS.Signals | null }>;
+};
 
 /** Starts a worker process and resolves once it says it is ready. */
 async function startWorker(env: Record<string, string>): Promise<Worker> {
@@ -59,8 +63,14 @@ async function startWorker(env: Record<string, string>): Promise<Worker> {
   let out = "";
   child.stdout!.on("data", (d: Buffer) => (out += d.toString()));
   child.stderr!.on("data", (d: Buffer) => (out += d.toString()));
-  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) => child.once("exit", (code, signal) => resolve({ code, signal })));
-  await until(async () => out.includes("[worker] ready") || child.exitCode !== null, 60_000, () => `worker did not start:\n${out}`);
+  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+    child.once("exit", (code, signal) => resolve({ code, signal })),
+  );
+  await until(
+    async () => out.includes("[worker] ready") || child.exitCode !== null,
+    60_000,
+    () => `worker did not start:\n${out}`,
+  );
   if (child.exitCode !== null) throw new Error(`worker exited at start (${child.exitCode}):\n${out}`);
   return { child, output: () => out, exited };
 }
@@ -73,7 +83,8 @@ async function until(check: () => Promise<boolean>, timeoutMs: number, what: () 
   }
 }
 
-const events = (db: DB, id: string) => db.selectFrom("job_events").select(["state", "message"]).where("article_id", "=", id).orderBy("id").execute();
+const events = (db: DB, id: string) =>
+  db.selectFrom("job_events").select(["state", "message"]).where("article_id", "=", id).orderBy("id").execute();
 const readingCount = async (db: DB, id: string) => (await events(db, id)).filter((e) => e.state === "reading").length;
 
 async function kill(w: Worker) {
@@ -86,22 +97,44 @@ describe("the worker process", () => {
     // Two tries, claims expiring after 2 s: the production preset (heartbeat 30 s, 4 tries) takes
     // minutes to run out. The heartbeat is off here because its floor is 10 s; expiry is the same
     // pg-boss path (a lost claim becomes a retry, the last one goes to the dead-letter queue).
-    const preset: Omit<RetryPreset, "heartbeatSeconds"> & { heartbeatSeconds: null } = { retryLimit: 1, retryDelay: 0, retryBackoff: false, expireInSeconds: 2, heartbeatSeconds: null };
+    const preset: Omit<RetryPreset, "heartbeatSeconds"> & { heartbeatSeconds: null } = {
+      retryLimit: 1,
+      retryDelay: 0,
+      retryBackoff: false,
+      expireInSeconds: 2,
+      heartbeatSeconds: null,
+    };
     const env = { ECHOLINE_MINING_RETRY: JSON.stringify(preset) };
     const hang = { ...env, ECHOLINE_TEST_WORKER_HANG_AFTER_READING: "1" };
 
     // The first worker creates the queues with the short preset; the upload's sender only uses them.
     const first = await startWorker(hang);
-    const data = await pdfOf([["Methods", "Reliability above .70 was treated as acceptable (Quandt & Maréchal, 2004, p. 31)."]]);
-    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), { data, filename: "crash.pdf", uploadedBy: null });
+    const data = await pdfOf([
+      ["Methods", "Reliability above .70 was treated as acceptable (Quandt & Maréchal, 2004, p. 31)."],
+    ]);
+    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), {
+      data,
+      filename: "crash.pdf",
+      uploadedBy: null,
+    });
 
-    await until(async () => (await readingCount(t.db, articleId)) >= 1, 30_000, () => `first try never started:\n${first.output()}`);
+    await until(
+      async () => (await readingCount(t.db, articleId)) >= 1,
+      30_000,
+      () => `first try never started:\n${first.output()}`,
+    );
     await kill(first);
     // The try that died leaves the article `reading` until the claim is found expired.
-    expect((await t.db.selectFrom("articles").select("status").where("id", "=", articleId).executeTakeFirstOrThrow()).status).toBe("reading");
+    expect(
+      (await t.db.selectFrom("articles").select("status").where("id", "=", articleId).executeTakeFirstOrThrow()).status,
+    ).toBe("reading");
 
     const second = await startWorker(hang);
-    await until(async () => (await readingCount(t.db, articleId)) >= 2, 30_000, () => `second try never started:\n${second.output()}`);
+    await until(
+      async () => (await readingCount(t.db, articleId)) >= 2,
+      30_000,
+      () => `second try never started:\n${second.output()}`,
+    );
     await kill(second);
 
     // A healthy worker: it must not get a third try (that would mine the article to `done`), only
@@ -113,23 +146,48 @@ describe("the worker process", () => {
     expect(final.failure_message).toBe("Mining stopped 2 times without finishing (worker crashed or timed out).");
     const history = await events(t.db, articleId);
     expect(history.filter((e) => e.state === "reading")).toHaveLength(2);
-    expect(history.some((e) => e.state === "retry" && /Try 1 of 2 stopped without finishing/.test(e.message ?? ""))).toBe(true);
-    expect(history.at(-1)).toMatchObject({ state: "failed", message: expect.stringMatching(/^stopped: Mining stopped 2 times/) });
+    expect(
+      history.some((e) => e.state === "retry" && /Try 1 of 2 stopped without finishing/.test(e.message ?? "")),
+    ).toBe(true);
+    expect(history.at(-1)).toMatchObject({
+      state: "failed",
+      message: expect.stringMatching(/^stopped: Mining stopped 2 times/),
+    });
     expect(await rowCounts(t.db, [articleId])).toEqual({ statements: 0, citations: 0, references: 0 });
     await kill(third);
   }, 120_000);
 
   it("the heartbeat notices a killed worker long before its claim expires (the production mechanism)", async () => {
     // One try, a claim that would last 5 min, and pg-boss's smallest heartbeat (10 s).
-    const env = { ECHOLINE_MINING_RETRY: JSON.stringify({ retryLimit: 0, retryDelay: 0, retryBackoff: false, expireInSeconds: 300, heartbeatSeconds: 10 }) };
+    const env = {
+      ECHOLINE_MINING_RETRY: JSON.stringify({
+        retryLimit: 0,
+        retryDelay: 0,
+        retryBackoff: false,
+        expireInSeconds: 300,
+        heartbeatSeconds: 10,
+      }),
+    };
     const first = await startWorker({ ...env, ECHOLINE_TEST_WORKER_HANG_AFTER_READING: "1" });
-    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), { data: await pdfOf([["Heartbeat fixture, invented."]]), filename: "heartbeat.pdf", uploadedBy: null });
-    await until(async () => (await readingCount(t.db, articleId)) >= 1, 30_000, () => `never started:\n${first.output()}`);
+    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), {
+      data: await pdfOf([["Heartbeat fixture, invented."]]),
+      filename: "heartbeat.pdf",
+      uploadedBy: null,
+    });
+    await until(
+      async () => (await readingCount(t.db, articleId)) >= 1,
+      30_000,
+      () => `never started:\n${first.output()}`,
+    );
     const killedAt = Date.now();
     await kill(first);
     const second = await startWorker(env);
     const [final] = [...(await waitForArticles(t.db, [articleId], 60_000)).values()];
-    expect(final).toMatchObject({ status: "failed", failure_code: "stopped", failure_message: "Mining stopped 1 time without finishing (worker crashed or timed out)." });
+    expect(final).toMatchObject({
+      status: "failed",
+      failure_code: "stopped",
+      failure_message: "Mining stopped 1 time without finishing (worker crashed or timed out).",
+    });
     // Well inside the 300 s expiry: heartbeat 10 s + supervise 1 s + worker start-up and polling.
     expect(Date.now() - killedAt).toBeLessThan(60_000);
     await kill(second);
@@ -139,9 +197,19 @@ describe("the worker process", () => {
     const w = await startWorker({ ECHOLINE_MINER_HARD_TIMEOUT_SECONDS: "4" });
     const storage = folderStorage(filesDir);
     // The isolated miner's thread loops forever on this file name (ECHOLINE_TEST_HOOKS=1).
-    const hung = await ingestFile(t.db, storage, { data: await pdfOf([["Hang fixture one, invented."]]), filename: TEST_HANG_FILENAME, uploadedBy: null });
+    const hung = await ingestFile(t.db, storage, {
+      data: await pdfOf([["Hang fixture one, invented."]]),
+      filename: TEST_HANG_FILENAME,
+      uploadedBy: null,
+    });
     const next = await ingestFile(t.db, storage, {
-      data: await pdfOf([["Method", "Internal consistency was adequate, Cronbach's alpha = .81.", "Loadings of at least .40 were retained (Vellacourt, 2012)."]]),
+      data: await pdfOf([
+        [
+          "Method",
+          "Internal consistency was adequate, Cronbach's alpha = .81.",
+          "Loadings of at least .40 were retained (Vellacourt, 2012).",
+        ],
+      ]),
       filename: "next.pdf",
       uploadedBy: null,
     });
@@ -154,8 +222,16 @@ describe("the worker process", () => {
     expect(w.child.exitCode).toBeNull();
 
     // SIGTERM while a document is in progress: the worker waits for its outcome, then exits 0.
-    const third = await ingestFile(t.db, storage, { data: await pdfOf([["Hang fixture two, invented."]]), filename: TEST_HANG_FILENAME, uploadedBy: null });
-    await until(async () => (await readingCount(t.db, third.articleId)) >= 1, 30_000, () => `never started:\n${w.output()}`);
+    const third = await ingestFile(t.db, storage, {
+      data: await pdfOf([["Hang fixture two, invented."]]),
+      filename: TEST_HANG_FILENAME,
+      uploadedBy: null,
+    });
+    await until(
+      async () => (await readingCount(t.db, third.articleId)) >= 1,
+      30_000,
+      () => `never started:\n${w.output()}`,
+    );
     const t0 = Date.now();
     w.child.kill("SIGTERM");
     const exit = await w.exited;
@@ -164,7 +240,11 @@ describe("the worker process", () => {
     expect(w.output()).toContain("[worker] stopped");
     // The bound in workers/index.ts (18 s, under the 20 s after which `npm start` kills it).
     expect(tookMs).toBeLessThan(18_000);
-    const a = await t.db.selectFrom("articles").select(["status", "failure_code"]).where("id", "=", third.articleId).executeTakeFirstOrThrow();
+    const a = await t.db
+      .selectFrom("articles")
+      .select(["status", "failure_code"])
+      .where("id", "=", third.articleId)
+      .executeTakeFirstOrThrow();
     expect(a).toEqual({ status: "failed", failure_code: "timeout" });
   }, 120_000);
 });

@@ -20,19 +20,29 @@ const job = (id: string, data: object) => ({ id, name: GRAPH_QUEUES.resolve, dat
 
 describe("graph jobs", () => {
   it("report each job of a batch on its own: bad data fails only its job", async () => {
-    const resolve = createGraphJobs({ db: () => t.db, send: async () => {} }).find((j) => j.name === GRAPH_QUEUES.resolve)!;
+    const resolve = createGraphJobs({ db: () => t.db, send: async () => {} }).find(
+      (j) => j.name === GRAPH_QUEUES.resolve,
+    )!;
     expect(resolve.batchSize).toBeGreaterThan(1);
     // An article that no longer exists is a no-op (deleted after its job was queued).
     const out = await resolve.handler([job("a", { articleId: "not-a-uuid" }), job("b", { articleId: randomUUID() })]);
-    expect(out.map((r) => [r.id, r.status])).toEqual([["a", "failed"], ["b", "completed"]]);
+    expect(out.map((r) => [r.id, r.status])).toEqual([
+      ["a", "failed"],
+      ["b", "completed"],
+    ]);
   });
 
   it("queue one re-check per older article per slot, and one more for the next slot, however many ask", async () => {
     const boss = await senderFor(t.db);
     await boss.createQueue(GRAPH_QUEUES.resolve).catch(() => {});
     const older = randomUUID();
-    for (let i = 0; i < 6; i++) await boss.send(GRAPH_QUEUES.resolve, { articleId: older, recheck: true }, recheckOnce(older));
-    const n = await sql<{ n: number }>`select count(*)::int as n from pgboss.job where name = ${GRAPH_QUEUES.resolve} and data->>'articleId' = ${older}`.execute(t.db);
+    for (let i = 0; i < 6; i++)
+      await boss.send(GRAPH_QUEUES.resolve, { articleId: older, recheck: true }, recheckOnce(older));
+    const n = await sql<{
+      n: number;
+    }>`select count(*)::int as n from pgboss.job where name = ${GRAPH_QUEUES.resolve} and data->>'articleId' = ${older}`.execute(
+      t.db,
+    );
     // This slot's re-check plus, for the requests that found it taken, one in the next slot (three
     // if the six sends happen to straddle a 10 s slot boundary); never one per request.
     expect(n.rows[0].n).toBeGreaterThanOrEqual(2);
@@ -50,7 +60,12 @@ describe("graph jobs", () => {
     const late = await boss.send(GRAPH_QUEUES.trails, { practiceId }, trailsOnce(practiceId, 5));
     expect(first).toBeTruthy();
     expect(late).toBeTruthy();
-    const rows = await sql<{ start_after: Date; created_on: Date }>`select start_after, created_on from pgboss.job where name = ${GRAPH_QUEUES.trails} and data->>'practiceId' = ${practiceId} order by start_after`.execute(t.db);
+    const rows = await sql<{
+      start_after: Date;
+      created_on: Date;
+    }>`select start_after, created_on from pgboss.job where name = ${GRAPH_QUEUES.trails} and data->>'practiceId' = ${practiceId} order by start_after`.execute(
+      t.db,
+    );
     expect(rows.rows).toHaveLength(2);
     expect(rows.rows[1].start_after.getTime()).toBeGreaterThan(rows.rows[0].start_after.getTime());
     await boss.stop({ graceful: false, close: false });

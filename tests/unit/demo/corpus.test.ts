@@ -4,7 +4,9 @@ import { compileProcedures, defaultProcedures } from "@/lib/mining/procedures";
 
 const corpus: DemoCorpus = generateCorpus();
 const sentencesOf = (a: DemoArticle, section?: string): DemoSentence[] =>
-  a.blocks.filter((b) => b.section !== "references" && (!section || b.section === section)).flatMap((b) => b.paragraphs.flat());
+  a.blocks
+    .filter((b) => b.section !== "references" && (!section || b.section === section))
+    .flatMap((b) => b.paragraphs.flat());
 const empirical = corpus.articles.filter((a) => !a.isMethodsArticle);
 const byId = new Map(corpus.articles.map((a) => [a.id, a]));
 
@@ -66,14 +68,20 @@ function citationsInText(text: string): { cite: Cite; secondaryVia: Cite | null 
   }
   for (const m of text.matchAll(NARRATIVE)) {
     const [first, rest] = m[1].split(/ and | et al\./);
-    out.push({ cite: { first, two: m[1].includes(" and ") ? rest : null, etAl: m[1].includes("et al."), year: m[2] }, secondaryVia: null });
+    out.push({
+      cite: { first, two: m[1].includes(" and ") ? rest : null, etAl: m[1].includes("et al."), year: m[2] },
+      secondaryVia: null,
+    });
   }
   return out;
 }
 function findReference(a: DemoArticle, c: Cite) {
   return a.references.filter((r) => {
     const authors = r.text.slice(0, r.text.indexOf(" ("));
-    const families = authors.split(/, (?:& )?(?:\p{Lu}\. ?)+,? ?(?:& )?/u).map((s) => s.replace(/,.*$/, "").trim()).filter(Boolean);
+    const families = authors
+      .split(/, (?:& )?(?:\p{Lu}\. ?)+,? ?(?:& )?/u)
+      .map((s) => s.replace(/,.*$/, "").trim())
+      .filter(Boolean);
     if (families[0] !== c.first || !r.text.includes(`(${c.year})`)) return false;
     if (c.two) return families.length === 2 && families[1] === c.two;
     if (c.etAl) return families.length >= 3;
@@ -91,7 +99,10 @@ describe("demo corpus: citations and references agree", () => {
           if (secondaryVia) {
             secondary++;
             expect(findReference(a, secondaryVia), `${a.id}: ${s.text}`).toHaveLength(1);
-            expect(findReference(a, cite), `original of a secondary citation must not be listed (${a.id})`).toHaveLength(0);
+            expect(
+              findReference(a, cite),
+              `original of a secondary citation must not be listed (${a.id})`,
+            ).toHaveLength(0);
           } else {
             expect(findReference(a, cite), `${a.id}: ${s.text}`).toHaveLength(1);
           }
@@ -130,7 +141,9 @@ describe("demo corpus: citations and references agree", () => {
 // asserts the same statistic and value, follow its claim, until a methods source or nothing.
 type End = "methods_with_page" | "methods_no_page" | "misquote" | "unsourced" | "precedent_silent" | "outside";
 function claimsIn(a: DemoArticle, statistic: string, value: number) {
-  return sentencesOf(a).filter((s) => s.statements.some((t) => t.kind === "threshold" && t.statistic === statistic && t.value === value));
+  return sentencesOf(a).filter((s) =>
+    s.statements.some((t) => t.kind === "threshold" && t.statistic === statistic && t.value === value),
+  );
 }
 function follow(s: DemoSentence, statistic: string, value: number, depth = 0): { end: End; length: number } {
   const direct = s.citations.filter((c) => !c.secondary);
@@ -151,7 +164,12 @@ function follow(s: DemoSentence, statistic: string, value: number, depth = 0): {
 
 describe("demo corpus: practices spread through citation chains", () => {
   const claims = empirical.flatMap((a) =>
-    sentencesOf(a, "methods").flatMap((s) => s.statements.filter((t) => t.kind === "threshold" && t.practice && t.statistic !== "p_value").slice(0, 1).map((t) => ({ a, s, t }))),
+    sentencesOf(a, "methods").flatMap((s) =>
+      s.statements
+        .filter((t) => t.kind === "threshold" && t.practice && t.statistic !== "p_value")
+        .slice(0, 1)
+        .map((t) => ({ a, s, t })),
+    ),
   );
   const traced = claims.map((c) => ({ ...c, ...follow(c.s, c.t.statistic!, c.t.value!) }));
   const counts = traced.reduce<Record<string, number>>((m, x) => ((m[x.end] = (m[x.end] ?? 0) + 1), m), {});
@@ -169,13 +187,19 @@ describe("demo corpus: practices spread through citation chains", () => {
   it("has chains through earlier articles of the same venue that end at a methods book with a page", () => {
     const viaPrecedent = traced.filter((x) => x.length >= 2);
     expect(viaPrecedent.length).toBeGreaterThan(80);
-    const longToBook = viaPrecedent.filter((x) => x.end === "methods_with_page" && corpus.works[lastWork(x.s, x.t.statistic!, x.t.value!)].kind === "book");
+    const longToBook = viaPrecedent.filter(
+      (x) => x.end === "methods_with_page" && corpus.works[lastWork(x.s, x.t.statistic!, x.t.value!)].kind === "book",
+    );
     expect(longToBook.length).toBeGreaterThan(20);
     expect(viaPrecedent.some((x) => x.length >= 3)).toBe(true);
-    const firstHopSameVenue = viaPrecedent.filter((x) => byId.get(x.s.citations[0].workKey)?.venueKey === x.a.venueKey).length;
+    const firstHopSameVenue = viaPrecedent.filter(
+      (x) => byId.get(x.s.citations[0].workKey)?.venueKey === x.a.venueKey,
+    ).length;
     expect(firstHopSameVenue / viaPrecedent.length).toBeGreaterThan(0.7);
     // Precedent is cited as written in the trade: narratively ("following Brandt et al. (2003)") too.
-    expect(viaPrecedent.some((x) => /^(Following|In line with|As in|Consistent with) \p{Lu}/u.test(x.s.text))).toBe(true);
+    expect(viaPrecedent.some((x) => /^(Following|In line with|As in|Consistent with) \p{Lu}/u.test(x.s.text))).toBe(
+      true,
+    );
   });
 
   it("has second-hand claims whose intermediate article cites the methods source directly", () => {
@@ -191,12 +215,19 @@ describe("demo corpus: practices spread through citation chains", () => {
 
   it("drifts: Tarnwick's unsourced alpha rule rises, Veldmark's locators fall", () => {
     const rate = (venue: string, from: number, to: number, pick: (x: (typeof traced)[number]) => boolean | null) => {
-      const xs = traced.filter((x) => x.a.venueKey === venue && x.a.year >= from && x.a.year <= to).map(pick).filter((v): v is boolean => v !== null);
+      const xs = traced
+        .filter((x) => x.a.venueKey === venue && x.a.year >= from && x.a.year <= to)
+        .map(pick)
+        .filter((v): v is boolean => v !== null);
       return xs.filter(Boolean).length / xs.length;
     };
-    const unsourcedAlpha = (x: (typeof traced)[number]) => (x.t.statistic === "cronbach_alpha" ? !/\(\p{Lu}[^()]*\d{4}/u.test(x.s.text) && !/\(\d{4}[,)]/.test(x.s.text) : null);
+    const unsourcedAlpha = (x: (typeof traced)[number]) =>
+      x.t.statistic === "cronbach_alpha"
+        ? !/\(\p{Lu}[^()]*\d{4}/u.test(x.s.text) && !/\(\d{4}[,)]/.test(x.s.text)
+        : null;
     expect(rate("trcb", 2015, 2025, unsourcedAlpha)).toBeGreaterThan(rate("trcb", 1995, 2007, unsourcedAlpha) + 0.15);
-    const locator = (x: (typeof traced)[number]) => (x.end === "methods_with_page" || x.end === "methods_no_page" ? /\d{4}, pp?\. \d/.test(x.s.text) : null);
+    const locator = (x: (typeof traced)[number]) =>
+      x.end === "methods_with_page" || x.end === "methods_no_page" ? /\d{4}, pp?\. \d/.test(x.s.text) : null;
     expect(rate("vjis", 2016, 2025, locator)).toBeLessThan(rate("vjis", 1995, 2010, locator));
   });
 });
@@ -212,8 +243,18 @@ describe("demo corpus: hard cases and procedures", () => {
   const all = empirical.flatMap((a) => sentencesOf(a));
   it("contains hard negatives: sample sizes, ages, years, scale points, p as result, money", () => {
     const neg = all.filter((s) => s.hardNegative && s.statements.length === 0);
-    for (const re of [/\(N = \d+\)/, /aged between \d+ and \d+ years/, /between \w+ and \w+ (19|20)\d\d/, /\d-point Likert/, /p < \.001|p = \.0\d/, /€\d+/]) {
-      expect(neg.some((s) => re.test(s.text)), String(re)).toBe(true);
+    for (const re of [
+      /\(N = \d+\)/,
+      /aged between \d+ and \d+ years/,
+      /between \w+ and \w+ (19|20)\d\d/,
+      /\d-point Likert/,
+      /p < \.001|p = \.0\d/,
+      /€\d+/,
+    ]) {
+      expect(
+        neg.some((s) => re.test(s.text)),
+        String(re),
+      ).toBe(true);
     }
     expect(all.some((s) => /α = \.05/.test(s.text) && s.statements.every((t) => t.statistic === "p_value"))).toBe(true);
   });

@@ -21,12 +21,22 @@ async function write(a: DemoArticle): Promise<string> {
   writeFileSync(file, await renderArticlePdf(a));
   return file;
 }
-const pdftotext = (file: string, args: string[] = []) => execFileSync("pdftotext", [...args, "-enc", "UTF-8", file, "-"], { encoding: "utf8" });
+const pdftotext = (file: string, args: string[] = []) =>
+  execFileSync("pdftotext", [...args, "-enc", "UTF-8", file, "-"], { encoding: "utf8" });
 function pdfinfo(file: string): Record<string, string> {
   const out = execFileSync("pdfinfo", ["-enc", "UTF-8", file], { encoding: "utf8" });
-  return Object.fromEntries(out.split("\n").filter((l) => l.includes(":")).map((l) => [l.slice(0, l.indexOf(":")), l.slice(l.indexOf(":") + 1).trim()]));
+  return Object.fromEntries(
+    out
+      .split("\n")
+      .filter((l) => l.includes(":"))
+      .map((l) => [l.slice(0, l.indexOf(":")), l.slice(l.indexOf(":") + 1).trim()]),
+  );
 }
-const methodsSentences = (a: DemoArticle) => a.blocks.filter((b) => b.section === "methods").flatMap((b) => b.paragraphs.flat()).map((s) => s.text);
+const methodsSentences = (a: DemoArticle) =>
+  a.blocks
+    .filter((b) => b.section === "methods")
+    .flatMap((b) => b.paragraphs.flat())
+    .map((s) => s.text);
 
 describe("demo PDFs, read back with pdftotext and pdfinfo", () => {
   const single = corpus.articles.find((a) => !a.twoColumn && !a.isMethodsArticle && a.year > 2010)!;
@@ -55,7 +65,10 @@ describe("demo PDFs, read back with pdftotext and pdfinfo", () => {
     expect(info.Author.split("; ")[0]).toBe(`${single.authors[0].family}, ${single.authors[0].initials}`);
     expect(info["Page size"]).toMatch(/595\.28 x 841\.89/);
     for (let p = 1; p <= pages; p++) {
-      const lines = pdftotext(file, ["-f", String(p), "-l", String(p)]).split("\n").map((l) => l.trim()).filter(Boolean);
+      const lines = pdftotext(file, ["-f", String(p), "-l", String(p)])
+        .split("\n")
+        .map((l) => l.trim())
+        .filter(Boolean);
       expect(lines.at(-1)).toBe(String(single.firstPage + p - 1));
       if (p > 1) expect(lines[0]).toContain(`${single.venueName} · invented demo venue`);
     }
@@ -71,21 +84,29 @@ describe("demo PDFs, read back with pdftotext and pdfinfo", () => {
   });
 
   it("pagesPerArticle makes long PDFs for benchmarks", async () => {
-    const long = generateCorpus({ count: 12, pagesPerArticle: 30 }).articles.find((a) => !a.isMethodsArticle && !a.twoColumn)!;
+    const long = generateCorpus({ count: 12, pagesPerArticle: 30 }).articles.find(
+      (a) => !a.isMethodsArticle && !a.twoColumn,
+    )!;
     const pages = Number(pdfinfo(await write(long)).Pages);
     expect(pages).toBeGreaterThanOrEqual(22);
     expect(pages).toBeLessThanOrEqual(40);
   });
 
   it("renders the same bytes twice (the loader's idempotency relies on the file hash)", async () => {
-    const h = async () => createHash("sha256").update(await renderArticlePdf(double)).digest("hex");
+    const h = async () =>
+      createHash("sha256")
+        .update(await renderArticlePdf(double))
+        .digest("hex");
     expect(await h()).toBe(await h());
   });
 });
 
 describe("upload metadata", () => {
   it("CSV parses (papaparse) into one row per file with doi, title, authors, year, venue, licence", () => {
-    const parsed = Papa.parse<Record<string, string>>(renderMetadataCsv(corpus), { header: true, skipEmptyLines: true });
+    const parsed = Papa.parse<Record<string, string>>(renderMetadataCsv(corpus), {
+      header: true,
+      skipEmptyLines: true,
+    });
     expect(parsed.errors).toEqual([]);
     expect(parsed.data).toHaveLength(corpus.articles.length);
     const row = parsed.data.find((r) => r.doi === corpus.articles[7].doi)!;
@@ -99,7 +120,12 @@ describe("upload metadata", () => {
   it("BibTeX parses with citation-js into the same DOIs, titles and authors", () => {
     // citation-js's bundled typings declare a zero-argument constructor; the documented call takes the input.
     const CiteWithInput = Cite as unknown as new (input: string) => { data: unknown[] };
-    const items = new CiteWithInput(renderMetadataBibtex(corpus)).data as { DOI?: string; title?: string; author?: { family?: string }[]; issued?: { "date-parts"?: number[][] } }[];
+    const items = new CiteWithInput(renderMetadataBibtex(corpus)).data as {
+      DOI?: string;
+      title?: string;
+      author?: { family?: string }[];
+      issued?: { "date-parts"?: number[][] };
+    }[];
     expect(items).toHaveLength(corpus.articles.length);
     for (const a of corpus.articles) {
       const it = items.find((x) => x.DOI === a.doi);

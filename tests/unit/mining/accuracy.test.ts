@@ -27,10 +27,15 @@ describe("miner accuracy on the gold set", () => {
       score(pdfTally, excerpt, out.line.statements, "pdf");
     }
     await miner.close();
-    const goldStatements = gold.reduce((n, g) => n + g.excerpt.sentences.reduce((m, s) => m + s.statements.length, 0), 0);
+    const goldStatements = gold.reduce(
+      (n, g) => n + g.excerpt.sentences.reduce((m, s) => m + s.statements.length, 0),
+      0,
+    );
     const negatives = gold.reduce((n, g) => n + g.excerpt.negatives.length, 0);
     const row = (name: string, v: number, bar: number) => ({ measure: name, value: Number(v.toFixed(3)), bar });
-    console.log(`gold: ${gold.length} excerpts, ${goldStatements} labelled statements, ${negatives} negatives; ${pdfExcerpts.length} also as PDF (${interleavedExcerpts.length} of them also drawn interleaved)`);
+    console.log(
+      `gold: ${gold.length} excerpts, ${goldStatements} labelled statements, ${negatives} negatives; ${pdfExcerpts.length} also as PDF (${interleavedExcerpts.length} of them also drawn interleaved)`,
+    );
     console.table([
       row("threshold F1", f1(t, "threshold"), 0.92),
       row("reported F1", f1(t, "reported"), 0.9),
@@ -53,8 +58,10 @@ describe("miner accuracy on the gold set", () => {
     expect(t.valueOk / t.matched).toBeGreaterThanOrEqual(0.97);
   });
   it("gets framing right (>= 0.85)", () => expect(t.framingOk / t.framingN).toBeGreaterThanOrEqual(0.85));
-  it("tells whether citations carry a locator (>= 0.95)", () => expect(t.locatorOk / t.locatorN).toBeGreaterThanOrEqual(0.95));
-  it("gives no statement for at least 97% of the hard negatives", () => expect(t.negativesClean / t.negatives).toBeGreaterThanOrEqual(0.97));
+  it("tells whether citations carry a locator (>= 0.95)", () =>
+    expect(t.locatorOk / t.locatorN).toBeGreaterThanOrEqual(0.95));
+  it("gives no statement for at least 97% of the hard negatives", () =>
+    expect(t.negativesClean / t.negatives).toBeGreaterThanOrEqual(0.97));
   it("holds on the PDF versions too", () => {
     expect(f1(pdfTally, "threshold")).toBeGreaterThanOrEqual(0.92);
     expect(f1(pdfTally, "reported")).toBeGreaterThanOrEqual(0.9);

@@ -27,7 +27,11 @@ beforeAll(async () => {
 describe("mine CLI", () => {
   it("prints one valid line per file, goes on after failures and exits 2", () => {
     const rel = (f: string) => path.relative(root, f);
-    const r = spawnSync("npm", ["run", "--silent", "mine", "--", rel(goodPdf), rel(badBin), "no/such/file.pdf"], { cwd: root, encoding: "utf8", timeout: 60_000 });
+    const r = spawnSync("npm", ["run", "--silent", "mine", "--", rel(goodPdf), rel(badBin), "no/such/file.pdf"], {
+      cwd: root,
+      encoding: "utf8",
+      timeout: 60_000,
+    });
     expect(r.status).toBe(2);
     const lines = r.stdout.trim().split("\n");
     expect(lines).toHaveLength(3);
@@ -36,14 +40,25 @@ describe("mine CLI", () => {
     const [ok, bad, missing] = parsed;
     if ("error" in ok) throw new Error(ok.error.message);
     expect(ok.pages).toBe(1);
-    expect(ok.statements.map((s) => [s.kind, s.statistic, s.comparator, s.value])).toEqual([["threshold", "cronbach_alpha", ">=", 0.7], ["reported", "cronbach_alpha", "=", 0.84]]);
-    expect(ok.statements[0].citations[0]).toMatchObject({ authors: "Okafor & Lindqvist", year: "1994", locator: "p. 112" });
+    expect(ok.statements.map((s) => [s.kind, s.statistic, s.comparator, s.value])).toEqual([
+      ["threshold", "cronbach_alpha", ">=", 0.7],
+      ["reported", "cronbach_alpha", "=", 0.84],
+    ]);
+    expect(ok.statements[0].citations[0]).toMatchObject({
+      authors: "Okafor & Lindqvist",
+      year: "1994",
+      locator: "p. 112",
+    });
     expect(ok.references).toHaveLength(1);
     expect("error" in bad && bad.error.code).toBe("not_pdf");
     expect("error" in missing && missing.error.code).toBe("not_found");
   });
   it("exits 0 when every file was mined", () => {
-    const r = spawnSync("npm", ["run", "--silent", "mine", "--", path.relative(root, goodPdf)], { cwd: root, encoding: "utf8", timeout: 60_000 });
+    const r = spawnSync("npm", ["run", "--silent", "mine", "--", path.relative(root, goodPdf)], {
+      cwd: root,
+      encoding: "utf8",
+      timeout: 60_000,
+    });
     expect(r.status).toBe(0);
     expect(r.stdout.trim().split("\n")).toHaveLength(1);
   });

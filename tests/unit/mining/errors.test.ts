@@ -40,7 +40,8 @@ describe("error codes", () => {
     expect(code(await createMiner({ maxPages: 1 }).mine({ data: good, filename: "long.pdf" }))).toBe("too_many_pages");
   });
   it("a PDF with an empty page tree is zero_pages", async () => {
-    const pdf = "%PDF-1.4\n1 0 obj\n<< /Type /Catalog /Pages 2 0 R >>\nendobj\n2 0 obj\n<< /Type /Pages /Kids [] /Count 0 >>\nendobj\n";
+    const pdf =
+      "%PDF-1.4\n1 0 obj\n<< /Type /Catalog /Pages 2 0 R >>\nendobj\n2 0 obj\n<< /Type /Pages /Kids [] /Count 0 >>\nendobj\n";
     const xrefAt = pdf.length;
     const off = (n: number) => String(pdf.indexOf(`${n} 0 obj`)).padStart(10, "0");
     const full = `${pdf}xref\n0 3\n0000000000 65535 f \n${off(1)} 00000 n \n${off(2)} 00000 n \ntrailer\n<< /Size 3 /Root 1 0 R >>\nstartxref\n${xrefAt}\n%%EOF\n`;
@@ -48,14 +49,28 @@ describe("error codes", () => {
     expect(code(await mine(new TextEncoder().encode(full)))).toBe("zero_pages");
   });
   it("XML that is not JATS is not_jats; JATS is mined with its front matter", async () => {
-    expect(code(await mine(new TextEncoder().encode('<?xml version="1.0"?><rss><channel><title>x</title></channel></rss>')))).toBe("not_jats");
+    expect(
+      code(await mine(new TextEncoder().encode('<?xml version="1.0"?><rss><channel><title>x</title></channel></rss>'))),
+    ).toBe("not_jats");
     expect(code(await mine(new TextEncoder().encode("<article><front><article-meta>")))).toBe("corrupt");
     const jats = `<?xml version="1.0"?><article><front><journal-meta><journal-title-group><journal-title>Journal of Shift Studies</journal-title></journal-title-group></journal-meta><article-meta><article-id pub-id-type="doi">10.5555/JSS.1</article-id><title-group><article-title>Recovery after night work</article-title></title-group><contrib-group><contrib contrib-type="author"><name><surname>Moreau</surname><given-names>C.</given-names></name></contrib></contrib-group><pub-date><year>2011</year></pub-date><permissions><license xlink:href="https://creativecommons.org/licenses/by/4.0/"><license-p>CC BY 4.0</license-p></license></permissions></article-meta></front><body><sec><title>Method</title><p>Cronbach's alpha should be at least .70 (Okafor &amp; Lindqvist, 1994, p. 112).</p></sec></body><back><ref-list><ref><mixed-citation>Okafor, E., &amp; Lindqvist, B. (1994). Psychometric foundations for applied researchers. Kestrel House.</mixed-citation></ref></ref-list></back></article>`;
     const o = await mine(new TextEncoder().encode(jats), "a.xml");
     expect(code(o)).toBe("ok");
-    expect(o.meta).toMatchObject({ title: "Recovery after night work", authors: ["Moreau, C."], year: "2011", doi: "10.5555/jss.1", venue: "Journal of Shift Studies", licence: "https://creativecommons.org/licenses/by/4.0/" });
+    expect(o.meta).toMatchObject({
+      title: "Recovery after night work",
+      authors: ["Moreau, C."],
+      year: "2011",
+      doi: "10.5555/jss.1",
+      venue: "Journal of Shift Studies",
+      licence: "https://creativecommons.org/licenses/by/4.0/",
+    });
     if (!isErrorLine(o.line)) {
-      expect(o.line.statements[0]).toMatchObject({ section: "methods", statistic: "cronbach_alpha", comparator: ">=", value: 0.7 });
+      expect(o.line.statements[0]).toMatchObject({
+        section: "methods",
+        statistic: "cronbach_alpha",
+        comparator: ">=",
+        value: 0.7,
+      });
       expect(o.line.references[0]).toMatchObject({ year: "1994", kind: "book" });
     }
   });
@@ -94,6 +109,8 @@ describe("malformed files never throw or hang", () => {
       expect(ContractLine.safeParse(o.line).success).toBe(true);
       codes.push(code(o));
     }
-    expect(codes.every((c) => ["ok", "corrupt", "no_text_layer", "zero_pages", "timeout", "encrypted"].includes(c))).toBe(true);
+    expect(
+      codes.every((c) => ["ok", "corrupt", "no_text_layer", "zero_pages", "timeout", "encrypted"].includes(c)),
+    ).toBe(true);
   }, 120_000);
 });

@@ -20,14 +20,37 @@ export function loadGold(): { excerpt: GoldExcerpt; text: string }[] {
 }
 
 export type Tally = {
-  tp: Record<string, number>; fp: Record<string, number>; fn: Record<string, number>;
-  matched: number; comparatorOk: number; valueOk: number; framingN: number; framingOk: number;
-  locatorN: number; locatorOk: number; negatives: number; negativesClean: number;
+  tp: Record<string, number>;
+  fp: Record<string, number>;
+  fn: Record<string, number>;
+  matched: number;
+  comparatorOk: number;
+  valueOk: number;
+  framingN: number;
+  framingOk: number;
+  locatorN: number;
+  locatorOk: number;
+  negatives: number;
+  negativesClean: number;
   errors: string[];
 };
 
 export function newTally(): Tally {
-  return { tp: {}, fp: {}, fn: {}, matched: 0, comparatorOk: 0, valueOk: 0, framingN: 0, framingOk: 0, locatorN: 0, locatorOk: 0, negatives: 0, negativesClean: 0, errors: [] };
+  return {
+    tp: {},
+    fp: {},
+    fn: {},
+    matched: 0,
+    comparatorOk: 0,
+    valueOk: 0,
+    framingN: 0,
+    framingOk: 0,
+    locatorN: 0,
+    locatorOk: 0,
+    negatives: 0,
+    negativesClean: 0,
+    errors: [],
+  };
 }
 
 const inc = (r: Record<string, number>, k: string) => (r[k] = (r[k] ?? 0) + 1);
@@ -39,9 +62,13 @@ function citationClass(s: Statement): GoldStatement["citation"] {
 
 export function score(t: Tally, excerpt: GoldExcerpt, predicted: Statement[], label: string): void {
   const pred = predicted.map((p) => ({ p, n: normaliseSentence(p.sentence), used: false }));
-  const golds = excerpt.sentences.flatMap((s) => s.statements.map((g) => ({ g, n: normaliseSentence(s.text), text: s.text })));
+  const golds = excerpt.sentences.flatMap((s) =>
+    s.statements.map((g) => ({ g, n: normaliseSentence(s.text), text: s.text })),
+  );
   for (const { g, n, text } of golds) {
-    const cands = pred.filter((x) => !x.used && x.n === n && x.p.kind === g.kind && (g.kind === "procedure" || x.p.statistic === g.statistic));
+    const cands = pred.filter(
+      (x) => !x.used && x.n === n && x.p.kind === g.kind && (g.kind === "procedure" || x.p.statistic === g.statistic),
+    );
     const hit = cands.find((x) => x.p.value === g.value) ?? cands[0];
     if (!hit) {
       inc(t.fn, g.kind);
@@ -53,13 +80,17 @@ export function score(t: Tally, excerpt: GoldExcerpt, predicted: Statement[], la
     if (g.kind === "procedure") continue;
     t.matched++;
     if (hit.p.comparator === g.comparator) t.comparatorOk++;
-    else t.errors.push(`${label} ${excerpt.id} COMPARATOR ${g.statistic} got ${hit.p.comparator} want ${g.comparator} | ${text}`);
+    else
+      t.errors.push(
+        `${label} ${excerpt.id} COMPARATOR ${g.statistic} got ${hit.p.comparator} want ${g.comparator} | ${text}`,
+      );
     if (hit.p.value !== null && g.value !== null && Math.abs(hit.p.value - g.value) < 1e-9) t.valueOk++;
     else t.errors.push(`${label} ${excerpt.id} VALUE ${g.statistic} got ${hit.p.value} want ${g.value} | ${text}`);
     if (g.kind === "threshold") {
       t.framingN++;
       if (hit.p.framing === g.framing) t.framingOk++;
-      else t.errors.push(`${label} ${excerpt.id} FRAMING ${g.statistic} got ${hit.p.framing} want ${g.framing} | ${text}`);
+      else
+        t.errors.push(`${label} ${excerpt.id} FRAMING ${g.statistic} got ${hit.p.framing} want ${g.framing} | ${text}`);
     }
     if (g.citation !== "none") {
       t.locatorN++;
@@ -70,7 +101,9 @@ export function score(t: Tally, excerpt: GoldExcerpt, predicted: Statement[], la
   for (const x of pred) {
     if (x.used) continue;
     inc(t.fp, x.p.kind);
-    t.errors.push(`${label} ${excerpt.id} EXTRA ${x.p.kind} ${x.p.statistic} ${x.p.comparator} ${x.p.value} | ${x.p.sentence}`);
+    t.errors.push(
+      `${label} ${excerpt.id} EXTRA ${x.p.kind} ${x.p.statistic} ${x.p.comparator} ${x.p.value} | ${x.p.sentence}`,
+    );
   }
   for (const neg of excerpt.negatives) {
     t.negatives++;

@@ -10,7 +10,12 @@ import { createMiner, extractPdfPages, isErrorLine } from "@/lib/mining/index";
 import { ensureGoldPdfs, generatedDir, interleavedExcerpts, pdfExcerpts } from "@/tests/fixtures/make-gold-pdfs";
 
 function words(s: string): string[] {
-  return s.replace(/-\s*\n\s*/g, "").replace(/[^\p{L}\p{N}.%]+/gu, " ").toLowerCase().split(/\s+/).filter(Boolean);
+  return s
+    .replace(/-\s*\n\s*/g, "")
+    .replace(/[^\p{L}\p{N}.%]+/gu, " ")
+    .toLowerCase()
+    .split(/\s+/)
+    .filter(Boolean);
 }
 /** Word-multiset overlap (Dice coefficient on bags of words). */
 function similarity(a: string[], b: string[]): number {
@@ -51,7 +56,9 @@ function bigramRecall(a: string, b: string): number {
 }
 
 function pdftotextPages(file: string, layout: boolean): string[] {
-  const out = execFileSync("pdftotext", [...(layout ? ["-layout"] : []), "-enc", "UTF-8", file, "-"], { encoding: "utf8" });
+  const out = execFileSync("pdftotext", [...(layout ? ["-layout"] : []), "-enc", "UTF-8", file, "-"], {
+    encoding: "utf8",
+  });
   const pages = out.split("\f");
   if (!pages.at(-1)!.trim()) pages.pop();
   return pages;

@@ -20,9 +20,13 @@ const gold = readdirSync(goldDir)
   .map((f) => readFileSync(path.join(goldDir, f), "utf8"));
 
 const demoText = (count: number, pagesPerArticle: number) =>
-  generateCorpus({ count, pagesPerArticle, seed: 11 }).articles.slice(0, count).map((a) =>
-    a.blocks.map((b) => [b.heading ?? "", ...b.paragraphs.map((p) => p.map((s) => s.text).join(" "))].join("\n")).join("\n"),
-  );
+  generateCorpus({ count, pagesPerArticle, seed: 11 })
+    .articles.slice(0, count)
+    .map((a) =>
+      a.blocks
+        .map((b) => [b.heading ?? "", ...b.paragraphs.map((p) => p.map((s) => s.text).join(" "))].join("\n"))
+        .join("\n"),
+    );
 
 describe("tokenizeLikeNatural equals natural's SentenceTokenizer (natural 8.1.1, reference)", () => {
   it("on every gold excerpt", () => {

@@ -9,7 +9,13 @@ import {
   type ThresholdStatement,
 } from "@/lib/practices";
 
-const alphaFixed: Practice = { id: "a70f", statistic: "cronbach_alpha", comparator: ">=", value: 0.7, framing: "fixed" };
+const alphaFixed: Practice = {
+  id: "a70f",
+  statistic: "cronbach_alpha",
+  comparator: ">=",
+  value: 0.7,
+  framing: "fixed",
+};
 const alphaAny: Practice = { id: "a70", statistic: "cronbach_alpha", comparator: ">=", value: 0.7, framing: null };
 const alpha80: Practice = { id: "a80", statistic: "cronbach_alpha", comparator: ">=", value: 0.8, framing: null };
 const alphaUpper: Practice = { id: "a70u", statistic: "cronbach_alpha", comparator: "<", value: 0.7, framing: null };
@@ -47,7 +53,9 @@ describe("matchPractices", () => {
   });
 
   it("keeps significance α (p_value) apart from coefficient α, and ignores incomplete statements", () => {
-    expect(matchPractices({ statistic: "p_value", comparator: "<", value: ".05", framing: null }, all)).toEqual(["p05"]);
+    expect(matchPractices({ statistic: "p_value", comparator: "<", value: ".05", framing: null }, all)).toEqual([
+      "p05",
+    ]);
     expect(matchPractices(st({ statistic: null }), all)).toEqual([]);
     expect(matchPractices(st({ value: null }), all)).toEqual([]);
     expect(matchPractices(st({ value: "seventy" }), all)).toEqual([]);

@@ -30,7 +30,9 @@ describe("normaliseDoi (DOI Handbook: DOIs are case-insensitive; resolver prefix
 
 describe("normaliseTitle", () => {
   it("folds case, diacritics, ligatures, OCR hyphen breaks, ampersands, stop words and editions", () => {
-    expect(normaliseTitle("Measure- ment of Self-Report Bias: The Ångström & Beyond (2nd ed.)")).toBe("measurement selfreport bias angstrom beyond");
+    expect(normaliseTitle("Measure- ment of Self-Report Bias: The Ångström & Beyond (2nd ed.)")).toBe(
+      "measurement selfreport bias angstrom beyond",
+    );
     expect(normaliseTitle("Signiﬁcance testing")).toBe("significance testing");
     expect(normaliseTitle("Coefficient α")).toBe("coefficient alpha");
     expect(normaliseTitle("THE TRAIT–STATE–OCCASION TEST")).toBe("traitstateoccasion test");
@@ -88,8 +90,20 @@ describe("scorePair and resolveReference", () => {
     title: "Reliability of short attitude scales",
     doi: null,
   };
-  const work = { id: "w1", doi: "https://doi.org/10.55501/jamp.2014.0031", title: "Reliability of short attitude scales: A simulation study", firstAuthor: "Okafor, T. B.", year: "2014" };
-  const sibling = { id: "w2", doi: null, title: "Validity of short attitude scales", firstAuthor: "Okafor, T. B.", year: "2014" };
+  const work = {
+    id: "w1",
+    doi: "https://doi.org/10.55501/jamp.2014.0031",
+    title: "Reliability of short attitude scales: A simulation study",
+    firstAuthor: "Okafor, T. B.",
+    year: "2014",
+  };
+  const sibling = {
+    id: "w2",
+    doi: null,
+    title: "Validity of short attitude scales",
+    firstAuthor: "Okafor, T. B.",
+    year: "2014",
+  };
 
   it("matches by a DOI found in the raw text first", () => {
     expect(resolveReference(ref, [sibling, work])).toEqual({ id: "w1", method: "doi", score: 1 });

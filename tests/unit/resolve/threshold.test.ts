@@ -94,12 +94,16 @@ describe("reference resolution threshold, measured on labelled pairs", () => {
 // holdout was looked at while weighting title, author and year, so its figures are optimistic. The
 // floors were set before this set was first run; the figures it gives are in the README.
 describe("reference resolution on pairs written after the threshold was frozen", () => {
-  const fresh: Pair[] = JSON.parse(fs.readFileSync(path.join(import.meta.dirname, "../../fixtures/reference-pairs/fresh-pairs.json"), "utf8")).pairs;
+  const fresh: Pair[] = JSON.parse(
+    fs.readFileSync(path.join(import.meta.dirname, "../../fixtures/reference-pairs/fresh-pairs.json"), "utf8"),
+  ).pairs;
   it("keeps precision and recall at the exported threshold", () => {
     expect(fresh.length).toBeGreaterThanOrEqual(30);
     expect(fresh.filter((p) => !p.same).length).toBeGreaterThanOrEqual(10);
     const m = measure(fresh, TITLE_MATCH_THRESHOLD);
-    console.log(`fresh pairs: ${fresh.length} (${fresh.filter((p) => p.same).length} same) at ${TITLE_MATCH_THRESHOLD}: P=${m.precision.toFixed(3)} R=${m.recall.toFixed(3)} F1=${m.f1.toFixed(3)}; errors [${m.errors.join(", ")}]`);
+    console.log(
+      `fresh pairs: ${fresh.length} (${fresh.filter((p) => p.same).length} same) at ${TITLE_MATCH_THRESHOLD}: P=${m.precision.toFixed(3)} R=${m.recall.toFixed(3)} F1=${m.f1.toFixed(3)}; errors [${m.errors.join(", ")}]`,
+    );
     expect(m.precision).toBeGreaterThanOrEqual(0.9);
     expect(m.recall).toBeGreaterThanOrEqual(0.8);
   });

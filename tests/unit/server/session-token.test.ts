@@ -32,7 +32,12 @@ describe("sessionUserId", () => {
     const i = Math.floor(t.length / 2);
     const tampered = t.slice(0, i) + (t[i] === "A" ? "B" : "A") + t.slice(i + 1);
     expect(await sessionUserId(`${SESSION_COOKIE}=${tampered}`, null)).toBeNull();
-    expect(await sessionUserId(`${SESSION_COOKIE}=${await token("user-b", 3600, SESSION_COOKIE, "another-secret-another-secret-0123456789")}`, null)).toBeNull();
+    expect(
+      await sessionUserId(
+        `${SESSION_COOKIE}=${await token("user-b", 3600, SESSION_COOKIE, "another-secret-another-secret-0123456789")}`,
+        null,
+      ),
+    ).toBeNull();
   });
 
   it("refuses an expired token, also one it has read before", async () => {
@@ -56,6 +61,8 @@ describe("sessionUserId", () => {
   it("reassembles a cookie next-auth split into chunks", async () => {
     const t = await token("user-f");
     const half = Math.floor(t.length / 2);
-    expect(await sessionUserId(`${SESSION_COOKIE}.1=${t.slice(half)}; ${SESSION_COOKIE}.0=${t.slice(0, half)}`, null)).toBe("user-f");
+    expect(
+      await sessionUserId(`${SESSION_COOKIE}.1=${t.slice(half)}; ${SESSION_COOKIE}.0=${t.slice(0, half)}`, null),
+    ).toBe("user-f");
   });
 });

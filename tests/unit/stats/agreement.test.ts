@@ -3,9 +3,11 @@ import { cohenKappa, precisionRecall } from "@/lib/stats/agreement";
 
 function expand(table: number[][], labels: string[]): [string, string][] {
   const out: [string, string][] = [];
-  table.forEach((row, i) => row.forEach((count, j) => {
-    for (let k = 0; k < count; k++) out.push([labels[i], labels[j]]);
-  }));
+  table.forEach((row, i) =>
+    row.forEach((count, j) => {
+      for (let k = 0; k < count; k++) out.push([labels[i], labels[j]]);
+    }),
+  );
   return out;
 }
 
@@ -26,15 +28,72 @@ describe("cohenKappa", () => {
   });
 
   it("hand-countable 2×2 examples: 20/5/10/15 of 50 → κ = 0.40; 45/15/25/15 → 0.1304; 25/35/5/35 → 0.2593 (textbook-style worked examples, from memory)", () => {
-    expect(cohenKappa(expand([[20, 5], [10, 15]], ["yes", "no"])).kappa).toBeCloseTo(0.4, 10);
-    expect(cohenKappa(expand([[45, 15], [25, 15]], ["yes", "no"])).kappa).toBeCloseTo(0.06 / 0.46, 10);
-    expect(cohenKappa(expand([[25, 35], [5, 35]], ["yes", "no"])).kappa).toBeCloseTo(0.14 / 0.54, 10);
+    expect(
+      cohenKappa(
+        expand(
+          [
+            [20, 5],
+            [10, 15],
+          ],
+          ["yes", "no"],
+        ),
+      ).kappa,
+    ).toBeCloseTo(0.4, 10);
+    expect(
+      cohenKappa(
+        expand(
+          [
+            [45, 15],
+            [25, 15],
+          ],
+          ["yes", "no"],
+        ),
+      ).kappa,
+    ).toBeCloseTo(0.06 / 0.46, 10);
+    expect(
+      cohenKappa(
+        expand(
+          [
+            [25, 35],
+            [5, 35],
+          ],
+          ["yes", "no"],
+        ),
+      ).kappa,
+    ).toBeCloseTo(0.14 / 0.54, 10);
   });
 
   it("perfect agreement is 1, agreement at chance level is 0, single-category data is undefined", () => {
-    expect(cohenKappa(expand([[10, 0], [0, 5]], ["a", "b"])).kappa).toBe(1);
-    expect(cohenKappa(expand([[5, 5], [5, 5]], ["a", "b"])).kappa).toBeCloseTo(0, 12);
-    expect(Number.isNaN(cohenKappa([["a", "a"], ["a", "a"]]).kappa)).toBe(true);
+    expect(
+      cohenKappa(
+        expand(
+          [
+            [10, 0],
+            [0, 5],
+          ],
+          ["a", "b"],
+        ),
+      ).kappa,
+    ).toBe(1);
+    expect(
+      cohenKappa(
+        expand(
+          [
+            [5, 5],
+            [5, 5],
+          ],
+          ["a", "b"],
+        ),
+      ).kappa,
+    ).toBeCloseTo(0, 12);
+    expect(
+      Number.isNaN(
+        cohenKappa([
+          ["a", "a"],
+          ["a", "a"],
+        ]).kappa,
+      ),
+    ).toBe(true);
     expect(() => cohenKappa([])).toThrow(/at least one/);
   });
 });

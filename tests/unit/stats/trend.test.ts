@@ -68,7 +68,17 @@ describe("cochranArmitage", () => {
 
   it("rejects bad input with a clear error", () => {
     expect(() => cochranArmitage([{ score: 1, cases: 1, total: 2 }])).toThrow(/at least two groups/);
-    expect(() => cochranArmitage([{ score: 1, cases: 3, total: 2 }, { score: 2, cases: 0, total: 1 }])).toThrow(/cases/);
-    expect(() => cochranArmitage([{ score: Number.NaN, cases: 1, total: 2 }, { score: 2, cases: 0, total: 1 }])).toThrow(/score/);
+    expect(() =>
+      cochranArmitage([
+        { score: 1, cases: 3, total: 2 },
+        { score: 2, cases: 0, total: 1 },
+      ]),
+    ).toThrow(/cases/);
+    expect(() =>
+      cochranArmitage([
+        { score: Number.NaN, cases: 1, total: 2 },
+        { score: 2, cases: 0, total: 1 },
+      ]),
+    ).toThrow(/score/);
   });
 });

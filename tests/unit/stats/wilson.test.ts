@@ -6,7 +6,8 @@ import { normalQuantile, twoSidedNormalP, zForConfidence } from "@/lib/stats/dis
 
 // Published limits are given to 4 decimals and were probably computed with z = 1.96 rather than
 // 1.959964, so a check allows one unit of the 4th decimal.
-const close4 = (actual: number, expected: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(0.0001 + 1e-12);
+const close4 = (actual: number, expected: number) =>
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(0.0001 + 1e-12);
 
 describe("wilson: Newcombe (1998a), Statistics in Medicine 17:857–872, examples of Table II", () => {
   // Method 3 (score, no continuity correction). Limits from memory of the paper's table.

@@ -35,7 +35,12 @@ class FakeGraph implements TrailGraph {
   }
 }
 
-const cite = (citationId: string, workId: string | null, locator: string | null = null, secondary = false): TrailCitation => ({
+const cite = (
+  citationId: string,
+  workId: string | null,
+  locator: string | null = null,
+  secondary = false,
+): TrailCitation => ({
   citationId,
   workId,
   locator,
@@ -93,7 +98,11 @@ describe("buildTrail", () => {
 
   it("an unresolved reference (no work id, or an id the graph does not know) ends at unresolved", async () => {
     const g = graphOf([], {});
-    const t = await buildTrail({ statementId: "s", articleId: "A", citations: [cite("c1", null), cite("c2", "w-ghost")] }, g, P);
+    const t = await buildTrail(
+      { statementId: "s", articleId: "A", citations: [cite("c1", null), cite("c2", "w-ghost")] },
+      g,
+      P,
+    );
     expect(t.ends).toEqual([
       { kind: "unresolved", depth: 1, citationId: "c1" },
       { kind: "unresolved", depth: 1, citationId: "c2", workId: "w-ghost" },
@@ -110,7 +119,11 @@ describe("buildTrail", () => {
       B: [{ statementId: "sB", citations: [cite("cB1", "w-out"), cite("cB2", "w-C")] }],
     });
     const t = await buildTrail(
-      { statementId: "s", articleId: "A", citations: [cite("c1", "w-book"), cite("c2", "w-B"), cite("c3", "w-untyped")] },
+      {
+        statementId: "s",
+        articleId: "A",
+        citations: [cite("c1", "w-book"), cite("c2", "w-B"), cite("c3", "w-untyped")],
+      },
       g,
       P,
     );
@@ -127,21 +140,30 @@ describe("buildTrail", () => {
   it("cuts at maxDepth with a depth_limit end", async () => {
     const works = Array.from({ length: 10 }, (_, i) => article(`A${i}`));
     const stmts = Object.fromEntries(
-      Array.from({ length: 9 }, (_, i) => [`A${i}`, [{ statementId: `s${i}`, citations: [cite(`c${i}`, `w-A${i + 1}`)] }]]),
+      Array.from({ length: 9 }, (_, i) => [
+        `A${i}`,
+        [{ statementId: `s${i}`, citations: [cite(`c${i}`, `w-A${i + 1}`)] }],
+      ]),
     );
     const g = graphOf(works, stmts, false);
-    const t = await buildTrail({ statementId: "s0", articleId: "A0", citations: [cite("c0", "w-A1")] }, g, P, { maxDepth: 3 });
+    const t = await buildTrail({ statementId: "s0", articleId: "A0", citations: [cite("c0", "w-A1")] }, g, P, {
+      maxDepth: 3,
+    });
     expect(t.ends).toEqual([{ kind: "depth_limit", depth: 3, workId: "w-A3" }]);
     expect(t.length).toBe(3);
     expect(Math.max(...t.nodes.map((n) => n.depth))).toBe(3);
-    await expect(buildTrail({ statementId: "s0", articleId: "A0", citations: [] }, g, P, { maxDepth: 0 })).rejects.toThrow(/maxDepth/);
+    await expect(
+      buildTrail({ statementId: "s0", articleId: "A0", citations: [] }, g, P, { maxDepth: 0 }),
+    ).rejects.toThrow(/maxDepth/);
   });
 
   it("rejects malformed input and malformed graph answers with a clear error", async () => {
     const g = graphOf([], {});
     await expect(buildTrail({ statementId: "s" } as unknown as TrailStart, g, P)).rejects.toThrow(/citations array/);
     const bad = graphOf([{ id: "w-x", type: "book" } as unknown as TrailWork], {});
-    await expect(buildTrail({ statementId: "s", articleId: "A", citations: [cite("c", "w-x")] }, bad, P)).rejects.toThrow(/malformed work/);
+    await expect(
+      buildTrail({ statementId: "s", articleId: "A", citations: [cite("c", "w-x")] }, bad, P),
+    ).rejects.toThrow(/malformed work/);
   });
 });
 
@@ -177,7 +199,10 @@ describe("buildAllTrails", () => {
       for (const side of ["L", "R"]) {
         const id = `${side}${l}`;
         works.push(article(id));
-        const cites = l + 1 < layers ? [cite(`${id}-a`, `w-L${l + 1}`), cite(`${id}-b`, `w-R${l + 1}`)] : [cite(`${id}-a`, "w-book")];
+        const cites =
+          l + 1 < layers
+            ? [cite(`${id}-a`, `w-L${l + 1}`), cite(`${id}-b`, `w-R${l + 1}`)]
+            : [cite(`${id}-a`, "w-book")];
         stmts[id] = [{ statementId: `s-${id}`, citations: cites }];
       }
     }
@@ -192,10 +217,13 @@ describe("buildAllTrails", () => {
   });
 
   it("gives every statement of a cycle its own correct trail", async () => {
-    const g = graphOf([article("A"), article("B"), { id: "w-book", type: "methods_source", articleId: null, year: 1999 }], {
-      A: [{ statementId: "sA", citations: [cite("cAB", "w-B")] }],
-      B: [{ statementId: "sB", citations: [cite("cBA", "w-A"), cite("cBbook", "w-book")] }],
-    });
+    const g = graphOf(
+      [article("A"), article("B"), { id: "w-book", type: "methods_source", articleId: null, year: 1999 }],
+      {
+        A: [{ statementId: "sA", citations: [cite("cAB", "w-B")] }],
+        B: [{ statementId: "sB", citations: [cite("cBA", "w-A"), cite("cBbook", "w-book")] }],
+      },
+    );
     const all = await buildAllTrails(
       [
         { statementId: "sA", articleId: "A", citations: [cite("cAB", "w-B")] },

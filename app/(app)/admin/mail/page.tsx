@@ -19,17 +19,29 @@ export default async function MailPage() {
   return (
     <div className="grid gap-4">
       <h1 className="font-serif text-3xl font-semibold">Captured mail</h1>
-      <p className="text-ink-2">Every e-mail Echoline sends in local mode is caught by the mail fake (also at <a className="underline" href={base.replace("127.0.0.1", "localhost")}>its own page</a>).</p>
+      <p className="text-ink-2">
+        Every e-mail Echoline sends in local mode is caught by the mail fake (also at{" "}
+        <a className="underline" href={base.replace("127.0.0.1", "localhost")}>
+          its own page
+        </a>
+        ).
+      </p>
       {mails === null ? (
-        <p role="alert">The mail fake is not running. <code>npm start</code> starts it.</p>
+        <p role="alert">
+          The mail fake is not running. <code>npm start</code> starts it.
+        </p>
       ) : mails.length === 0 ? (
-        <EmptyState title="No mail yet">Invite someone or ask for a sign-in link; the message shows up here.</EmptyState>
+        <EmptyState title="No mail yet">
+          Invite someone or ask for a sign-in link; the message shows up here.
+        </EmptyState>
       ) : (
         <ul className="grid gap-3">
           {mails.slice(0, 50).map((m) => (
             <li key={m.id} className="rounded border border-rule p-3">
               <p className="font-medium">{m.subject}</p>
-              <p className="text-sm text-ink-2">To {m.to.join(", ")} · {new Date(m.at).toLocaleString("en-GB")}</p>
+              <p className="text-sm text-ink-2">
+                To {m.to.join(", ")} · {new Date(m.at).toLocaleString("en-GB")}
+              </p>
               <pre className="mt-2 whitespace-pre-wrap break-all text-sm">{m.text}</pre>
             </li>
           ))}

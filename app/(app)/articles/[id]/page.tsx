@@ -17,7 +17,12 @@ export const metadata = { title: "Article" };
 
 const SECTION_ORDER: Section[] = ["introduction", "methods", "results", "discussion", "other", "unknown"];
 const SECTION_LABEL: Record<Section, string> = {
-  introduction: "Introduction", methods: "Methods", results: "Results", discussion: "Discussion", other: "Other sections", unknown: "No section heading found",
+  introduction: "Introduction",
+  methods: "Methods",
+  results: "Results",
+  discussion: "Discussion",
+  other: "Other sections",
+  unknown: "No section heading found",
 };
 
 export default async function ArticlePage({ params }: { params: Promise<{ id: string }> }) {
@@ -30,25 +35,39 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
   const { article: a, statements, counts } = detail;
   const curate = can(actor, "corpus:curate");
   const venues = curate ? await db.selectFrom("venues").select(["id", "name"]).orderBy("name").execute() : [];
-  const bySection = SECTION_ORDER.map((s) => ({ section: s, items: statements.filter((x) => x.section === s) })).filter((g) => g.items.length);
+  const bySection = SECTION_ORDER.map((s) => ({ section: s, items: statements.filter((x) => x.section === s) })).filter(
+    (g) => g.items.length,
+  );
 
   return (
     <div className="grid gap-8">
       <header className="grid gap-2">
         <p className="text-sm text-ink-2">
-          <Link href="/articles" className="underline">Articles</Link> / {a.original_filename}
+          <Link href="/articles" className="underline">
+            Articles
+          </Link>{" "}
+          / {a.original_filename}
           {a.is_demo && " · invented demo article"}
         </p>
         <h1 className="font-serif text-3xl font-semibold">{a.title ?? a.original_filename}</h1>
         <p className="text-ink-2">
-          {a.authors.length ? a.authors.join("; ") : "Authors unknown"} · {a.venue ?? "venue unknown"} · {a.year ?? "year unknown"}
-          {a.doi && <> · DOI {a.doi}</>} · {a.licence ? `Licence: ${a.licence}` : <span className="text-accent">Licence not recorded: this article stays out of the dashboards until it is.</span>}
+          {a.authors.length ? a.authors.join("; ") : "Authors unknown"} · {a.venue ?? "venue unknown"} ·{" "}
+          {a.year ?? "year unknown"}
+          {a.doi && <> · DOI {a.doi}</>} ·{" "}
+          {a.licence ? (
+            `Licence: ${a.licence}`
+          ) : (
+            <span className="text-accent">
+              Licence not recorded: this article stays out of the dashboards until it is.
+            </span>
+          )}
         </p>
         <div className="flex flex-wrap items-center gap-4">
           <LiveStatus articleId={a.id} initial={a.status} reason={a.failure_message} />
           {a.status === "done" && (
             <span className="text-sm text-ink-2 tabular-nums">
-              {a.pages} pages · {statements.length} statements · {counts.citations} citations · {counts.references} references
+              {a.pages} pages · {statements.length} statements · {counts.citations} citations · {counts.references}{" "}
+              references
             </span>
           )}
           {curate && <RemineButton articleId={a.id} />}
@@ -56,10 +75,22 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
       </header>
 
       <section className="grid gap-4" aria-labelledby="statements-h">
-        <h2 id="statements-h" className="text-xl font-semibold">Statements</h2>
-        <p className="text-sm text-ink-2">Flags are screening aids, not findings: read the article before acting on one.</p>
+        <h2 id="statements-h" className="text-xl font-semibold">
+          Statements
+        </h2>
+        <p className="text-sm text-ink-2">
+          Flags are screening aids, not findings: read the article before acting on one.
+        </p>
         {statements.length === 0 ? (
-          <EmptyState title={a.status === "done" ? "No statements in this article" : a.status === "failed" ? "Mining failed" : "Not mined yet"}>
+          <EmptyState
+            title={
+              a.status === "done"
+                ? "No statements in this article"
+                : a.status === "failed"
+                  ? "Mining failed"
+                  : "Not mined yet"
+            }
+          >
             {a.status === "done"
               ? "The miner found no cut-off claims, reported values or listed procedures. If you expected some, check the text layer and re-mine after the extractor improves."
               : a.status === "failed"
@@ -72,18 +103,33 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
               <h3 className="font-semibold">{SECTION_LABEL[g.section]}</h3>
               <ul className="grid gap-4">
                 {g.items.map((s) => (
-                  <li key={s.id} id={`statement-${s.id}`} className="grid gap-1 border-l-2 border-rule pl-3 scroll-mt-4 target:border-accent target:bg-paper-2" data-testid="statement">
+                  <li
+                    key={s.id}
+                    id={`statement-${s.id}`}
+                    className="grid gap-1 border-l-2 border-rule pl-3 scroll-mt-4 target:border-accent target:bg-paper-2"
+                    data-testid="statement"
+                  >
                     <Evidence sentence={s.sentence} value={s.value} citations={s.citations} />
                     <div className="flex flex-wrap items-center gap-3 text-sm text-ink-2">
                       {/* Sourcing is about cut-off claims; an obtained value needs no source. */}
                       {s.kind === "threshold" && <SourcingBadge sourcing={s.sourcing} />}
                       <span>{s.kind}</span>
                       {s.statistic && <span>{s.statistic}</span>}
-                      {s.comparator && s.value !== null && <span className="tabular-nums">{s.comparator} {s.value}</span>}
+                      {s.comparator && s.value !== null && (
+                        <span className="tabular-nums">
+                          {s.comparator} {s.value}
+                        </span>
+                      )}
                       {s.framing && <span>{s.framing}</span>}
                       {s.procedure_key && <span>{s.procedure_key}</span>}
                       <span className="tabular-nums">page {s.page ?? "?"}</span>
-                      {curate && <ReviewButtons articleId={a.id} statementId={s.id} mine={s.reviews.find((r) => r.reviewer_id === actor.id)?.verdict ?? null} />}
+                      {curate && (
+                        <ReviewButtons
+                          articleId={a.id}
+                          statementId={s.id}
+                          mine={s.reviews.find((r) => r.reviewer_id === actor.id)?.verdict ?? null}
+                        />
+                      )}
                     </div>
                   </li>
                 ))}
@@ -95,8 +141,21 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
 
       {curate && (
         <section className="grid gap-3" aria-labelledby="meta-h">
-          <h2 id="meta-h" className="text-xl font-semibold">Correct the metadata</h2>
-          <MetadataForm articleId={a.id} venues={venues} initial={{ title: a.title, authors: a.authors, venueId: a.venue_id, year: a.year, doi: a.doi, licence: a.licence }} />
+          <h2 id="meta-h" className="text-xl font-semibold">
+            Correct the metadata
+          </h2>
+          <MetadataForm
+            articleId={a.id}
+            venues={venues}
+            initial={{
+              title: a.title,
+              authors: a.authors,
+              venueId: a.venue_id,
+              year: a.year,
+              doi: a.doi,
+              licence: a.licence,
+            }}
+          />
         </section>
       )}
     </div>

@@ -13,9 +13,14 @@ export default async function ProceduresPage() {
     <div className="grid gap-6">
       <h1 className="font-serif text-3xl font-semibold">Misdescribed procedures</h1>
       <p className="max-w-prose text-ink-2">
-        The miner flags a sentence as a procedure statement when it matches one of the enabled entries below. Patterns are regular expressions, matched without regard to case. Re-mine articles to apply a change to them.
+        The miner flags a sentence as a procedure statement when it matches one of the enabled entries below. Patterns
+        are regular expressions, matched without regard to case. Re-mine articles to apply a change to them.
       </p>
-      {procedures.length === 0 && <EmptyState title="No procedures yet">Add the first one with the form at the bottom, or run the database seed to load the defaults.</EmptyState>}
+      {procedures.length === 0 && (
+        <EmptyState title="No procedures yet">
+          Add the first one with the form at the bottom, or run the database seed to load the defaults.
+        </EmptyState>
+      )}
       {procedures.map((p) => (
         <ProcedureEditor key={p.id} proc={p} />
       ))}

@@ -10,9 +10,15 @@ import type { Role } from "@/db/schema/accounts";
 export const POST = route({ permission: "admin:users", body: inviteSchema }, async ({ actor, body }) => {
   let created;
   try {
-    created = await createInvitation(getDb(), { email: body.email, role: body.role as Role, venueIds: body.venueIds, invitedBy: actor.id });
+    created = await createInvitation(getDb(), {
+      email: body.email,
+      role: body.role as Role,
+      venueIds: body.venueIds,
+      invitedBy: actor.id,
+    });
   } catch (err) {
-    if (isUniqueViolation(err)) throw new HttpError(409, "exists", "Someone with that e-mail already has an account.", "email");
+    if (isUniqueViolation(err))
+      throw new HttpError(409, "exists", "Someone with that e-mail already has an account.", "email");
     throw err;
   }
   await mailTransport().sendMail({

@@ -8,7 +8,12 @@ export const POST = route({ permission: "admin:venues", body: venueSchema }, asy
   try {
     const v = await getDb()
       .insertInto("venues")
-      .values({ name: body.name, abbreviation: body.abbreviation, issn: body.issn, is_methods_venue: body.isMethodsVenue })
+      .values({
+        name: body.name,
+        abbreviation: body.abbreviation,
+        issn: body.issn,
+        is_methods_venue: body.isMethodsVenue,
+      })
       .returning(["id"])
       .executeTakeFirstOrThrow();
     return { ok: true, id: v.id };

@@ -5,7 +5,10 @@ import { HttpError } from "@/lib/server/errors";
 import { filtersSchema } from "@/lib/dashboards/filters";
 import { dashboardData, dashboardCsv, isDashboardName } from "@/lib/dashboards";
 
-const query = filtersSchema.extend({ format: z.enum(["json", "csv"]).optional(), table: z.string().max(40).optional() });
+const query = filtersSchema.extend({
+  format: z.enum(["json", "csv"]).optional(),
+  table: z.string().max(40).optional(),
+});
 
 // Read-only dashboards: JSON for the charts, or CSV of one chart's exact table.
 export const GET = route({ permission: "corpus:read", query }, async ({ params, query }) => {
@@ -15,6 +18,9 @@ export const GET = route({ permission: "corpus:read", query }, async ({ params, 
   if (query.format !== "csv") return data;
   const csv = dashboardCsv(data, query.table);
   return new Response(csv.body, {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="echoline-${name}-${csv.table}.csv"` },
+    headers: {
+      "content-type": "text/csv; charset=utf-8",
+      "content-disposition": `attachment; filename="echoline-${name}-${csv.table}.csv"`,
+    },
   });
 });

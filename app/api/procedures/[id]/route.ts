@@ -11,7 +11,8 @@ export const PUT = route({ permission: "practices:manage", body: ProcedureInput 
   try {
     if (!(await updateProcedure(getDb(), id.data, body, actor.id))) throw notFound("That procedure");
   } catch (err) {
-    if (isUniqueViolation(err)) throw new HttpError(409, "key_taken", "Another procedure already uses this key.", "key");
+    if (isUniqueViolation(err))
+      throw new HttpError(409, "key_taken", "Another procedure already uses this key.", "key");
     throw err;
   }
   return { ok: true };

@@ -22,7 +22,11 @@ export const GET = route({ permission: "corpus:upload", query: Query }, async ({
   const files = await db
     .selectFrom("articles")
     .select(["id", "original_filename", "status", "failure_code", "failure_message", "title", "upload_batch_id"])
-    .where((eb) => (query.ids.length ? eb.or([eb("upload_batch_id", "=", batch.id), eb("id", "in", query.ids)]) : eb("upload_batch_id", "=", batch.id)))
+    .where((eb) =>
+      query.ids.length
+        ? eb.or([eb("upload_batch_id", "=", batch.id), eb("id", "in", query.ids)])
+        : eb("upload_batch_id", "=", batch.id),
+    )
     .orderBy("created_at")
     .execute();
   return { batchId: batch.id, files };

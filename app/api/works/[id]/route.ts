@@ -18,8 +18,11 @@ export const GET = route({ permission: "corpus:read" }, async ({ params }) => {
   return w;
 });
 
-export const PATCH = route({ permission: "corpus:curate", body: z.object({ workType: z.enum(["methods_source", "empirical", "unknown"]) }) }, async ({ params, body }) => {
-  await setWorkType(getDb(), id(params.id), body.workType);
-  await rebuildAllSoon(getDb());
-  return { ok: true };
-});
+export const PATCH = route(
+  { permission: "corpus:curate", body: z.object({ workType: z.enum(["methods_source", "empirical", "unknown"]) }) },
+  async ({ params, body }) => {
+    await setWorkType(getDb(), id(params.id), body.workType);
+    await rebuildAllSoon(getDb());
+    return { ok: true };
+  },
+);

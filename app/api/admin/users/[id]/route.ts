@@ -10,12 +10,28 @@ export const PATCH = route({ permission: "admin:users", body: userPatchSchema },
   const id = z.string().uuid().safeParse(params.id);
   if (!id.success) throw notFound("That person");
   const db = getDb();
-  const target = await db.selectFrom("User").select(["role", "deactivated_at"]).where("id", "=", id.data).executeTakeFirst();
+  const target = await db
+    .selectFrom("User")
+    .select(["role", "deactivated_at"])
+    .where("id", "=", id.data)
+    .executeTakeFirst();
   if (!target) throw notFound("That person");
-  const losesAdmin = target.role === "admin" && !target.deactivated_at && ((body.role && body.role !== "admin") || body.active === false);
+  const losesAdmin =
+    target.role === "admin" &&
+    !target.deactivated_at &&
+    ((body.role && body.role !== "admin") || body.active === false);
   if (losesAdmin && (await activeAdminCount(db)) <= 1) {
-    throw new HttpError(409, "last_admin", "Echoline needs at least one active admin. Make someone else admin first.", body.role ? "role" : "active");
+    throw new HttpError(
+      409,
+      "last_admin",
+      "Echoline needs at least one active admin. Make someone else admin first.",
+      body.role ? "role" : "active",
+    );
   }
-  await updateUser(db, actor.id, id.data, { role: body.role as Role | undefined, active: body.active, venueIds: body.venueIds });
+  await updateUser(db, actor.id, id.data, {
+    role: body.role as Role | undefined,
+    active: body.active,
+    venueIds: body.venueIds,
+  });
   return { ok: true };
 });

@@ -19,7 +19,13 @@ export const POST = route({ permission: "corpus:upload", query: Query }, async (
   const db = getDb();
   const exists = await db.selectFrom("upload_batches").select("id").where("id", "=", batch.data).executeTakeFirst();
   if (!exists) throw notFound("That upload batch");
-  const tooLarge = () => new HttpError(413, "too_large", `${query.name} is larger than the ${UPLOAD_MAX_BYTES / 1048576} MB limit per file.`, "file");
+  const tooLarge = () =>
+    new HttpError(
+      413,
+      "too_large",
+      `${query.name} is larger than the ${UPLOAD_MAX_BYTES / 1048576} MB limit per file.`,
+      "file",
+    );
   if (Number(req.headers.get("content-length") ?? 0) > UPLOAD_MAX_BYTES) throw tooLarge();
   let data: Uint8Array;
   try {
@@ -30,11 +36,27 @@ export const POST = route({ permission: "corpus:upload", query: Query }, async (
   }
   const { metadata, matched } = await metadataForFile(db, batch.data, query.name);
   try {
-    const r = await ingestFile(db, getStorage(), { data, filename: query.name, metadata, uploadedBy: actor.id, batchId: batch.data });
+    const r = await ingestFile(db, getStorage(), {
+      data,
+      filename: query.name,
+      metadata,
+      uploadedBy: actor.id,
+      batchId: batch.data,
+    });
     if (r.duplicate) {
       // The existing article is shown in this batch's list too, so its status is visible here.
-      const a = await db.selectFrom("articles").select(["status", "original_filename"]).where("id", "=", r.articleId).executeTakeFirstOrThrow();
-      return { articleId: r.articleId, duplicate: true, status: a.status, existingFilename: a.original_filename, metadataMatched: matched };
+      const a = await db
+        .selectFrom("articles")
+        .select(["status", "original_filename"])
+        .where("id", "=", r.articleId)
+        .executeTakeFirstOrThrow();
+      return {
+        articleId: r.articleId,
+        duplicate: true,
+        status: a.status,
+        existingFilename: a.original_filename,
+        metadataMatched: matched,
+      };
     }
     return { articleId: r.articleId, duplicate: false, status: "queued", metadataMatched: matched };
   } catch (err) {

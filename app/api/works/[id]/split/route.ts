@@ -6,10 +6,16 @@ import { splitWork } from "@/lib/graph/works";
 import { rebuildAllSoon } from "@/lib/graph/rebuild";
 
 // Split wrongly matched references off this work into a new work.
-export const POST = route({ permission: "corpus:curate", body: z.object({ referenceIds: z.array(z.uuid()).min(1, "Choose at least one reference.").max(1000) }) }, async ({ params, body }) => {
-  const from = z.uuid().safeParse(params.id);
-  if (!from.success) throw new HttpError(400, "invalid", "That is not a work id.", "id");
-  const workId = await splitWork(getDb(), from.data, body.referenceIds);
-  await rebuildAllSoon(getDb());
-  return { ok: true, workId };
-});
+export const POST = route(
+  {
+    permission: "corpus:curate",
+    body: z.object({ referenceIds: z.array(z.uuid()).min(1, "Choose at least one reference.").max(1000) }),
+  },
+  async ({ params, body }) => {
+    const from = z.uuid().safeParse(params.id);
+    if (!from.success) throw new HttpError(400, "invalid", "That is not a work id.", "id");
+    const workId = await splitWork(getDb(), from.data, body.referenceIds);
+    await rebuildAllSoon(getDb());
+    return { ok: true, workId };
+  },
+);

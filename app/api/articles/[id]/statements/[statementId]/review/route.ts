@@ -10,12 +10,27 @@ export const PUT = route({ permission: "corpus:curate", body: ReviewInput }, asy
   const ids = z.object({ id: z.string().uuid(), statementId: z.string().uuid() }).safeParse(params);
   if (!ids.success) throw notFound("That statement");
   const db = getDb();
-  const s = await db.selectFrom("statements").select(["article_id", "fingerprint"]).where("id", "=", ids.data.statementId).where("article_id", "=", ids.data.id).executeTakeFirst();
+  const s = await db
+    .selectFrom("statements")
+    .select(["article_id", "fingerprint"])
+    .where("id", "=", ids.data.statementId)
+    .where("article_id", "=", ids.data.id)
+    .executeTakeFirst();
   if (!s) throw notFound("That statement");
   await db
     .insertInto("statement_reviews")
-    .values({ article_id: s.article_id, fingerprint: s.fingerprint, reviewer_id: actor.id, verdict: body.verdict, note: body.note ?? null })
-    .onConflict((oc) => oc.columns(["article_id", "fingerprint", "reviewer_id"]).doUpdateSet({ verdict: body.verdict, note: body.note ?? null, updated_at: sql`now()` }))
+    .values({
+      article_id: s.article_id,
+      fingerprint: s.fingerprint,
+      reviewer_id: actor.id,
+      verdict: body.verdict,
+      note: body.note ?? null,
+    })
+    .onConflict((oc) =>
+      oc
+        .columns(["article_id", "fingerprint", "reviewer_id"])
+        .doUpdateSet({ verdict: body.verdict, note: body.note ?? null, updated_at: sql`now()` }),
+    )
     .execute();
   return { ok: true, verdict: body.verdict };
 });
