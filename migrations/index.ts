@@ -9,6 +9,7 @@ import * as dashboardRollups from "./20261201T1901_dashboard_rollups";
 import * as dashboardFactCover from "./20261201T1906_dashboard_fact_cover";
 import * as inVenueNotLater from "./20261201T2042_in_venue_precedent_not_later";
 import * as referencePlacedByCurator from "./20261201T2043_reference_placed_by_curator";
+import * as vocabularyChecks from "./20261202T1400_vocabulary_checks";
 
 // Listed explicitly (no glob): the order here is the order they run. Append, never edit.
 export const migrations: Record<string, Migration> = {
@@ -22,4 +23,5 @@ export const migrations: Record<string, Migration> = {
   "20261201T1906_dashboard_fact_cover": dashboardFactCover,
   "20261201T2042_in_venue_precedent_not_later": inVenueNotLater,
   "20261201T2043_reference_placed_by_curator": referencePlacedByCurator,
+  "20261202T1400_vocabulary_checks": vocabularyChecks,
 };

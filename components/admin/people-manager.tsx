@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson, formErrorsOf } from "@/lib/http/fetch-json";
 import { inviteSchema, fieldErrors } from "@/lib/forms/accounts";
-import { ROLES } from "@/db/schema/accounts";
+import { ROLES } from "@/lib/vocabulary";
 import { Field, FormError } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 

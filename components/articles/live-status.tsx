@@ -3,7 +3,7 @@ import { useEffect, useRef } from "react";
 import { useRouter } from "next/navigation";
 import { useQuery } from "@tanstack/react-query";
 import { STATUS_LABEL, isFinished } from "@/components/upload/status";
-import type { ArticleStatus } from "@/db/schema/corpus";
+import type { ArticleStatus } from "@/lib/vocabulary";
 
 /** The article's status, polled while it is unfinished; the page re-renders when mining ends. */
 export function LiveStatus({

@@ -1,4 +1,4 @@
-import type { Sourcing } from "@/db/schema/corpus";
+import type { Sourcing } from "@/lib/vocabulary";
 import { SOURCING } from "./sourcing";
 
 export function SourcingBadge({ sourcing }: { sourcing: Sourcing }) {

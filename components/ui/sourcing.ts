@@ -1,4 +1,4 @@
-import type { Sourcing } from "@/db/schema/corpus";
+import type { Sourcing } from "@/lib/vocabulary";
 
 /**
  * The four sourcing colours, used identically in every chart, table and badge. Each is paired with a

@@ -1,4 +1,4 @@
-import type { ArticleStatus } from "@/db/schema/corpus";
+import type { ArticleStatus } from "@/lib/vocabulary";
 
 export const STATUS_LABEL: Record<ArticleStatus, string> = {
   uploaded: "Uploaded",

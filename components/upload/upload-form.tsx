@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useCallback, useId, useRef, useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { STATUS_LABEL, isFinished } from "./status";
-import type { ArticleStatus } from "@/db/schema/corpus";
+import type { ArticleStatus } from "@/lib/vocabulary";
 
 type Row = {
   key: string;

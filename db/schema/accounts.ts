@@ -1,7 +1,8 @@
 import type { ColumnType, Generated } from "kysely";
 
-export type Role = "admin" | "curator" | "editor" | "instructor" | "reader";
-export const ROLES: readonly Role[] = ["admin", "curator", "editor", "instructor", "reader"];
+import type { Role } from "@/lib/vocabulary";
+
+export type { Role };
 type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
 // Names and camelCase columns as @auth/kysely-adapter expects them.

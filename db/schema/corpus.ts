@@ -4,14 +4,22 @@ import type { MetadataEntry } from "@/lib/metadata";
 type Timestamp = ColumnType<Date, Date | string, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
 
-export type ArticleStatus = "uploaded" | "queued" | "reading" | "mining" | "done" | "failed";
-export type SourceKind = "pdf" | "jats" | "text";
-export type Section = "methods" | "results" | "discussion" | "introduction" | "other" | "unknown";
-export type StatementKind = "threshold" | "reported" | "procedure";
-export type Comparator = ">=" | ">" | "<=" | "<" | "=";
-export type Framing = "fixed" | "contextual";
-export type Sourcing = "unsourced" | "cited_no_locator" | "cited_with_locator" | "secondary_only";
-export type ReferenceKind = "book" | "chapter" | "article" | "other";
+import type {
+  ArticleStatus,
+  Comparator,
+  Framing,
+  ReferenceKind,
+  ReviewVerdict,
+  Section,
+  Sourcing,
+  SourceKind,
+  StatementKind,
+  StatisticKey,
+  WorkSetBy,
+} from "@/lib/vocabulary";
+
+// Enum columns take their types from lib/vocabulary.ts (one list per vocabulary).
+export type { ArticleStatus, Comparator, Framing, ReferenceKind, Section, Sourcing, SourceKind, StatementKind };
 
 export interface VenueTable {
   id: Generated<string>;
@@ -74,7 +82,9 @@ export interface StatementTable {
   section: Section;
   sentence: string;
   kind: StatementKind;
-  statistic: string | null;
+  statistic: StatisticKey | null;
+  /** The statistic's name as written, when `statistic` is `other`. */
+  statistic_label: string | null;
   comparator: Comparator | null;
   value: number | null;
   framing: Framing | null;
@@ -95,7 +105,7 @@ export interface ReferenceTable {
   kind: Generated<ReferenceKind>;
   work_id: string | null;
   /** "curator" when a merge or split put the reference on its work; re-resolution leaves those alone. */
-  work_set_by: Generated<"resolver" | "curator">;
+  work_set_by: Generated<WorkSetBy>;
 }
 export interface CitationTable {
   id: Generated<string>;
@@ -118,7 +128,7 @@ export interface StatementReviewTable {
   article_id: string;
   fingerprint: string;
   reviewer_id: string;
-  verdict: "correct" | "incorrect" | "corrected";
+  verdict: ReviewVerdict;
   corrected: Json<Record<string, unknown>> | null;
   note: string | null;
   created_at: Generated<Timestamp>;

@@ -1,11 +1,18 @@
 import type { ColumnType, Generated } from "kysely";
-import type { Comparator, Framing, ReferenceKind } from "./corpus";
+import type {
+  Comparator,
+  Framing,
+  ReferenceKind,
+  SourceCheckVerdict,
+  StatisticKey,
+  TrailEnd,
+  WorkType,
+  WorkTypeDecider,
+} from "@/lib/vocabulary";
 
 type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
-export type WorkType = "methods_source" | "empirical" | "unknown";
-export type TrailEnd = "methods_source" | "empirical_precedent" | "unresolved" | "no_citation" | "cycle";
-export type SourceCheckVerdict = "says_so" | "says_otherwise" | "silent" | "not_checked";
+export type { SourceCheckVerdict, TrailEnd, WorkType };
 
 export interface WorkTable {
   id: Generated<string>;
@@ -16,7 +23,7 @@ export interface WorkTable {
   year: string | null;
   kind: Generated<ReferenceKind>;
   work_type: Generated<WorkType>;
-  type_decided_by: Generated<"default" | "venue" | "reference_kind" | "curator">;
+  type_decided_by: Generated<WorkTypeDecider>;
   article_id: string | null;
   merged_into: string | null;
   created_at: Generated<Timestamp>;
@@ -25,7 +32,7 @@ export interface PracticeTable {
   id: Generated<string>;
   key: string;
   label: string;
-  statistic: string;
+  statistic: StatisticKey;
   comparator: Comparator;
   value: number;
   framing: Framing | null;

@@ -1,4 +1,5 @@
 import type { ColumnType, Generated } from "kysely";
+import type { ReportFrequency, ScreeningStatus } from "@/lib/vocabulary";
 
 type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
@@ -7,7 +8,7 @@ export interface ScreeningTable {
   editor_id: string;
   venue_id: string | null;
   filename: string;
-  status: Generated<"queued" | "mining" | "done" | "failed">;
+  status: Generated<ScreeningStatus>;
   failure_message: string | null;
   result: ColumnType<unknown, string | null, string | null> | null;
   created_at: Generated<Timestamp>;
@@ -36,7 +37,7 @@ export interface ReportSubscriptionTable {
   id: Generated<string>;
   user_id: string;
   venue_id: string;
-  frequency: "weekly" | "monthly" | "yearly";
+  frequency: ReportFrequency;
   last_sent_at: Timestamp | null;
 }
 export interface JobEventTable {

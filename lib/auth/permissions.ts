@@ -2,7 +2,7 @@
  * Who may do what. One role → permission map, checked on the server by every page, route handler
  * and job that acts for a person (lib/server/request.ts and lib/server/session.ts call `can`).
  */
-import type { Role } from "@/db/schema/accounts";
+import type { Role } from "@/lib/vocabulary";
 
 export type Permission =
   | "corpus:read" // browse and search articles, statements, works, dashboards

@@ -5,7 +5,7 @@
 import { sql } from "kysely";
 import { z } from "zod";
 import type { DB } from "@/db";
-import type { ArticleStatus } from "@/db/schema/corpus";
+import type { ArticleStatus } from "@/lib/vocabulary";
 
 export const ARTICLE_STATUSES: ArticleStatus[] = ["uploaded", "queued", "reading", "mining", "done", "failed"];
 export const UNFINISHED: ArticleStatus[] = ["uploaded", "queued", "reading", "mining"];

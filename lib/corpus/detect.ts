@@ -4,7 +4,7 @@
  * bytes. Everything else is refused with a message that says what the file looks like.
  */
 import { fileTypeFromBuffer } from "file-type";
-import type { SourceKind } from "@/db/schema/corpus";
+import type { SourceKind } from "@/lib/vocabulary";
 
 export type Detected = { kind: SourceKind; mediaType: string } | { kind: null; reason: string };
 

@@ -1,6 +1,6 @@
 import type { Kysely, Transaction } from "kysely";
 import type { Database } from "@/db";
-import type { ArticleStatus } from "@/db/schema/corpus";
+import type { ArticleStatus } from "@/lib/vocabulary";
 import { MINING_QUEUE } from "./queue";
 
 /** Every status change of an article is also a row of job_events: the article's history. */

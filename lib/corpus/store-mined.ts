@@ -6,7 +6,7 @@
 import { createHash } from "node:crypto";
 import type { Transaction } from "kysely";
 import type { Database } from "@/db";
-import type { Sourcing } from "@/db/schema/corpus";
+import type { Sourcing } from "@/lib/vocabulary";
 import type { DocumentCitation, Statement, StatementCitation, SuccessLine } from "@/lib/mining/contract";
 
 /** Sourcing of one statement, decided from its own citations (product.md, "sourcing"). */
@@ -170,6 +170,7 @@ export async function replaceMinedRows(
           sentence: s.sentence,
           kind: s.kind,
           statistic: s.statistic,
+          statistic_label: s.statistic === "other" ? (s.statistic_label ?? null) : null,
           comparator: s.comparator,
           value: s.value,
           framing: s.framing,

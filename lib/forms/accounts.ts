@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ROLES } from "@/db/schema/accounts";
+import { ROLES } from "@/lib/vocabulary";
 
 // One schema per form, used by the browser (field errors before sending) and by the route handler.
 export const emailField = z
@@ -27,7 +27,7 @@ export const acceptInvitationSchema = z
   })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ." });
 
-export const roleField = z.enum(ROLES as [string, ...string[]], { message: "Choose a role." });
+export const roleField = z.enum(ROLES, { message: "Choose a role." });
 
 export const inviteSchema = z.object({
   email: emailField,

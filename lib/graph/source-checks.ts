@@ -1,6 +1,6 @@
 import { sql } from "kysely";
 import type { DB } from "@/db";
-import type { SourceCheckVerdict } from "@/db/schema/graph";
+import type { SourceCheckVerdict } from "@/lib/vocabulary";
 
 export interface SourceCheckInput {
   workId: string;

@@ -2,7 +2,7 @@ import { sql } from "kysely";
 import type { DB } from "@/db";
 import { buildAllTrails, buildTrail, type Trail, type TrailSummary } from "@/lib/trails";
 import { dbTrailGraph, trailStarts } from "./trail-graph";
-import type { SourceCheckVerdict } from "@/db/schema/graph";
+import type { SourceCheckVerdict } from "@/lib/vocabulary";
 
 /** The source-check verdict for where a trail ends, when that end is a checked work. */
 function supportedBy(s: TrailSummary, checks: Map<string, SourceCheckVerdict>): SourceCheckVerdict | null {

@@ -1,6 +1,6 @@
 import { sql, type Transaction } from "kysely";
 import type { DB, Database } from "@/db";
-import type { WorkType } from "@/db/schema/graph";
+import type { WorkType } from "@/lib/vocabulary";
 import { HttpError } from "@/lib/server/errors";
 import { firstAuthorSurname, normaliseTitle, normaliseYear } from "@/lib/resolve";
 

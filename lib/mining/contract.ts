@@ -1,38 +1,18 @@
 // The mining contract of product.md ("Mining contract"): one JSON line per file. The worker stores
 // exactly what these schemas accept, so every line is validated before it leaves the miner.
 import { z } from "zod";
+import { COMPARATORS, FRAMINGS, SECTIONS, STATEMENT_KINDS, STATISTIC_KEYS } from "@/lib/vocabulary";
 
-export const statisticKeys = [
-  "cronbach_alpha",
-  "mcdonald_omega",
-  "composite_reliability",
-  "ave",
-  "factor_loading",
-  "htmt",
-  "vif",
-  "cfi",
-  "tli",
-  "rmsea",
-  "srmr",
-  "chi_square_df",
-  "kmo",
-  "eigenvalue",
-  "icc",
-  "cohen_kappa",
-  "p_value",
-  "r_squared",
-  "item_total_correlation",
-  "sample_size_ratio",
-  "statistical_power",
-  "other",
-] as const;
-export const StatisticKey = z.enum(statisticKeys);
+export const statisticKeys = STATISTIC_KEYS;
+export const StatisticKey = z.enum(STATISTIC_KEYS);
 export type StatisticKey = z.infer<typeof StatisticKey>;
 
-export const Section = z.enum(["methods", "results", "discussion", "introduction", "other", "unknown"]);
+export const Section = z.enum(SECTIONS);
 export type Section = z.infer<typeof Section>;
-export const Comparator = z.enum([">=", ">", "<=", "<", "="]);
+export const Comparator = z.enum(COMPARATORS);
 export type Comparator = z.infer<typeof Comparator>;
+export const Framing = z.enum(FRAMINGS);
+export type Framing = z.infer<typeof Framing>;
 
 export const StatementCitation = z.object({
   authors: z.string(),
@@ -50,11 +30,13 @@ export const Statement = z.object({
   page: z.number().int().positive(),
   section: Section,
   sentence: z.string(),
-  kind: z.enum(["threshold", "reported", "procedure"]),
+  kind: z.enum(STATEMENT_KINDS),
   statistic: StatisticKey.nullable(),
+  /** The statistic's name as written when `statistic` is "other" ("expected cell count"); else null. */
+  statistic_label: z.string().min(1).max(120).nullable().optional(),
   comparator: Comparator.nullable(),
   value: z.number().finite().nullable(),
-  framing: z.enum(["fixed", "contextual"]).nullable(),
+  framing: Framing.nullable(),
   /** Key of the matched procedure pattern (procedure statements only). */
   procedure: z.string().nullable().optional(),
   citations: z.array(StatementCitation),

@@ -44,6 +44,8 @@ export function statementAssertsPractice(
   tolerance = DEFAULT_VALUE_TOLERANCE,
 ): boolean {
   if (!statement.statistic || !statement.comparator) return false;
+  // A sentence that names a cut-off to argue against it never asserts the practice.
+  if (statement.framing === "disputed") return false;
   const value = parseStatValue(statement.value);
   if (value === null) return false;
   if (statement.statistic !== practice.statistic) return false;

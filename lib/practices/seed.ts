@@ -1,49 +1,18 @@
+import { formatValue, labelOf } from "@/lib/vocabulary";
 import type { Comparator, Framing, Practice, StatisticKey } from "./types";
 
 export interface SeedPractice extends Practice {
   label: string;
 }
 
-const STAT_LABEL: Record<StatisticKey, string> = {
-  cronbach_alpha: "Cronbach's alpha",
-  mcdonald_omega: "McDonald's omega",
-  composite_reliability: "Composite reliability",
-  ave: "Average variance extracted (AVE)",
-  factor_loading: "Factor loading",
-  htmt: "HTMT ratio",
-  vif: "VIF",
-  cfi: "CFI",
-  tli: "TLI",
-  rmsea: "RMSEA",
-  srmr: "SRMR",
-  chi_square_df: "χ²/df",
-  kmo: "KMO",
-  eigenvalue: "Eigenvalue",
-  icc: "ICC",
-  cohen_kappa: "Cohen's kappa",
-  p_value: "p",
-  r_squared: "R²",
-  item_total_correlation: "Item–total correlation",
-  sample_size_ratio: "Cases per variable",
-  statistical_power: "Statistical power",
-  other: "Other statistic",
-};
-
-const SYMBOL: Record<Comparator, string> = { ">=": "≥", ">": ">", "<=": "≤", "<": "<", "=": "=" };
-
 /** APA-style number: no leading zero below 1 and two decimals there (".70"), plain integers above. */
-export function formatPracticeValue(value: number): string {
-  if (Number.isInteger(value)) return String(value);
-  const abs = Math.abs(value);
-  const decimals = Math.max(2, (String(abs).split(".")[1] ?? "").length);
-  const s = abs.toFixed(decimals);
-  return (value < 0 ? "−" : "") + (abs < 1 ? s.replace(/^0/, "") : s);
-}
+export const formatPracticeValue = formatValue;
 
 export function practiceLabel(p: Pick<Practice, "statistic" | "comparator" | "value" | "framing">): string {
-  const base = `${STAT_LABEL[p.statistic]} ${SYMBOL[p.comparator]} ${formatPracticeValue(p.value)}`;
+  const base = `${labelOf("statistic", p.statistic)} ${labelOf("comparator", p.comparator)} ${formatValue(p.value)}`;
   if (p.framing === "fixed") return `${base}, as a fixed rule`;
   if (p.framing === "contextual") return `${base}, depending on context`;
+  if (p.framing === "disputed") return `${base}, disputed`;
   return base;
 }
 

@@ -1,32 +1,7 @@
-/** The miner's closed vocabulary of statistics (product brief, "Statistic keys"). */
-export const STATISTIC_KEYS = [
-  "cronbach_alpha",
-  "mcdonald_omega",
-  "composite_reliability",
-  "ave",
-  "factor_loading",
-  "htmt",
-  "vif",
-  "cfi",
-  "tli",
-  "rmsea",
-  "srmr",
-  "chi_square_df",
-  "kmo",
-  "eigenvalue",
-  "icc",
-  "cohen_kappa",
-  "p_value",
-  "r_squared",
-  "item_total_correlation",
-  "sample_size_ratio",
-  "statistical_power",
-  "other",
-] as const;
+import { STATISTIC_KEYS, type Comparator, type Framing, type StatisticKey } from "@/lib/vocabulary";
 
-export type StatisticKey = (typeof STATISTIC_KEYS)[number];
-export type Comparator = ">=" | ">" | "<=" | "<" | "=";
-export type Framing = "fixed" | "contextual";
+export { STATISTIC_KEYS };
+export type { Comparator, Framing, StatisticKey };
 
 export interface Practice {
   id: string;

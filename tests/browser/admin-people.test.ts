@@ -28,7 +28,7 @@ describe("admin: invite, change role, deactivate", () => {
     await b.page.getByRole("button", { name: "Send invitation" }).click();
     await b.page.getByText(`Invitation sent to ${email}`).waitFor();
     const mail = await waitForMail(email, t);
-    const link = mail.text.match(/http:\/\/localhost:3100\/invite\/\S+/)?.[0];
+    const link = mail.text.match(new RegExp(`${APP_URL}/invite/\\S+`))?.[0];
     expect(link).toBeTruthy();
 
     await b.context.clearCookies();

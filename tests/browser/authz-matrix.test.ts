@@ -8,7 +8,7 @@ import path from "node:path";
 import { MATRIX, type MatrixRow } from "../authz-matrix";
 import { APP_URL } from "../helpers/browser";
 import { sessionCookie } from "../helpers/http";
-import { ROLES, type Role } from "@/db/schema/accounts";
+import { ROLES, type Role } from "@/lib/vocabulary";
 
 const ROOT = path.resolve(import.meta.dirname, "../..");
 

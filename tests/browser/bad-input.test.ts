@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { spawn, type ChildProcess } from "node:child_process";
-import { APP_URL } from "../helpers/browser";
+import { APP_URL, E2E_PORT_BASE } from "../helpers/browser";
 import { sessionCookie } from "../helpers/http";
 import { stackEnv, waitForHttp } from "@/workers/stack";
 import { DATA_DIR } from "@/db/cluster";
@@ -66,13 +66,13 @@ describe("bad input gets a clear JSON error that names the field", () => {
 
 describe("the database being down", () => {
   let web: ChildProcess;
-  const port = 3199;
+  const port = E2E_PORT_BASE + 99;
   beforeAll(async () => {
     // The same build, pointed at a port where no PostgreSQL listens.
     const env = stackEnv({
       appPort: port,
-      smtpPort: 2625,
-      mailHttpPort: 2626,
+      smtpPort: E2E_PORT_BASE - 475,
+      mailHttpPort: E2E_PORT_BASE - 474,
       databaseUrl: "postgres://postgres@127.0.0.1:1/none",
       dataDir: path.join(DATA_DIR, "e2e"),
     });
@@ -84,7 +84,7 @@ describe("the database being down", () => {
   });
 
   it("gives a clear page and a clear JSON error, no stack trace", async () => {
-    const cookie = admin.replace(/localhost:3100/g, `localhost:${port}`);
+    const cookie = admin.replace(new RegExp(`localhost:${E2E_PORT_BASE}`, "g"), `localhost:${port}`);
     const page = await fetch(`http://localhost:${port}/home`, { headers: { cookie }, redirect: "manual" });
     const html = await page.text();
     expect(html).toMatch(/database (is not reachable|may be down)/i);

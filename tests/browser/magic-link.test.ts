@@ -17,7 +17,7 @@ async function requestLink(email: string) {
 }
 
 const linkIn = (text: string) => {
-  const m = text.match(/http:\/\/localhost:3100\/sign-in\/link\?\S+/);
+  const m = text.match(new RegExp(`${APP_URL}/sign-in/link\\?\\S+`));
   if (!m) throw new Error(`no sign-in link in mail: ${text}`);
   return m[0];
 };

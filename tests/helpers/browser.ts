@@ -5,8 +5,11 @@ import path from "node:path";
 import { DEMO_ACCOUNTS } from "@/db/seed";
 import type { Role } from "@/db/schema/accounts";
 
-export const APP_URL = "http://localhost:3100";
-export const MAIL_URL = "http://127.0.0.1:2626";
+// ECHOLINE_E2E_PORT_BASE moves the browser suite's ports (app = base, SMTP = base - 475, mail page =
+// base - 474; 3100/2625/2626 by default) so two checkouts can run it side by side.
+export const E2E_PORT_BASE = Number(process.env.ECHOLINE_E2E_PORT_BASE ?? 3100);
+export const APP_URL = `http://localhost:${E2E_PORT_BASE}`;
+export const MAIL_URL = `http://127.0.0.1:${E2E_PORT_BASE - 474}`;
 export const E2E_DATABASE_URL = "postgres://postgres@127.0.0.1:54321/echoline_e2e";
 
 // Launch flags for Debian's Chromium on this closed network (no background connections).

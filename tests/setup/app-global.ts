@@ -12,8 +12,14 @@ import { migrateToLatest } from "@/db/migrate";
 import { seedAll } from "@/db/seed";
 import { startStack, stackEnv, type Stack } from "@/workers/stack";
 import { prepareTemplate } from "./db-global";
+import { E2E_PORT_BASE } from "../helpers/browser";
 
-export const E2E = { appPort: 3100, smtpPort: 2625, mailHttpPort: 2626, database: "echoline_e2e" };
+export const E2E = {
+  appPort: E2E_PORT_BASE,
+  smtpPort: E2E_PORT_BASE - 475,
+  mailHttpPort: E2E_PORT_BASE - 474,
+  database: "echoline_e2e",
+};
 
 let stack: Stack | null = null;
 

@@ -75,7 +75,7 @@ describe("seedPractices (common practice in the literature, no source)", () => {
     const ids = seedPractices.map((p) => p.id);
     expect(new Set(ids).size).toBe(ids.length);
     for (const p of seedPractices) expect(STATISTIC_KEYS).toContain(p.statistic);
-    expect(seedPractices[0].label).toBe("Cronbach's alpha ≥ .70, as a fixed rule");
+    expect(seedPractices[0].label).toBe("Cronbach's α ≥ .70, as a fixed rule");
     expect(practiceLabel({ statistic: "vif", comparator: "<", value: 5, framing: null })).toBe("VIF < 5");
     expect(practiceLabel({ statistic: "rmsea", comparator: "<=", value: 0.06, framing: null })).toBe("RMSEA ≤ .06");
     expect(practiceLabel({ statistic: "eigenvalue", comparator: ">", value: 1, framing: null })).toBe("Eigenvalue > 1");

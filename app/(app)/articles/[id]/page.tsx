@@ -5,7 +5,7 @@ import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { getArticle } from "@/lib/corpus/articles";
-import type { Section } from "@/db/schema/corpus";
+import type { Section } from "@/lib/vocabulary";
 import { SourcingBadge } from "@/components/ui/sourcing-badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Evidence } from "@/components/articles/highlight";

@@ -5,7 +5,7 @@ import { createInvitation } from "@/db/queries/accounts";
 import { inviteSchema } from "@/lib/forms/accounts";
 import { mailTransport, MAIL_FROM, appUrl } from "@/lib/server/mail";
 import { invitationEmail } from "@/lib/server/mail-templates";
-import type { Role } from "@/db/schema/accounts";
+import type { Role } from "@/lib/vocabulary";
 
 export const POST = route({ permission: "admin:users", body: inviteSchema }, async ({ actor, body }) => {
   let created;

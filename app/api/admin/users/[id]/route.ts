@@ -4,7 +4,7 @@ import { HttpError, notFound } from "@/lib/server/errors";
 import { getDb } from "@/db";
 import { activeAdminCount, updateUser } from "@/db/queries/accounts";
 import { userPatchSchema } from "@/lib/forms/accounts";
-import type { Role } from "@/db/schema/accounts";
+import type { Role } from "@/lib/vocabulary";
 
 export const PATCH = route({ permission: "admin:users", body: userPatchSchema }, async ({ actor, body, params }) => {
   const id = z.string().uuid().safeParse(params.id);
