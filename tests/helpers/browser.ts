@@ -1,4 +1,5 @@
 import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { inject } from "vitest";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -61,11 +62,16 @@ export async function signInAs(page: Page, role: Role): Promise<void> {
 
 export type Mail = { id: string; to: string[]; subject: string; text: string };
 
+/** The header that opens the mail fake's API (its token comes from tests/setup/app-global.ts). */
+export function mailFakeHeaders(): Record<string, string> {
+  return { "x-mail-fake-token": inject("mailFakeToken") };
+}
+
 /** Waits until the mail fake holds a message for `to` newer than `after` (polls its API; no sleeps as proxies). */
 export async function waitForMail(to: string, after: number, timeoutMs = 20_000): Promise<Mail> {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
-    const r = await fetch(`${MAIL_URL}/messages?to=${encodeURIComponent(to)}`);
+    const r = await fetch(`${MAIL_URL}/messages?to=${encodeURIComponent(to)}`, { headers: mailFakeHeaders() });
     const list = (await r.json()) as (Mail & { at: string })[];
     const m = list.find((x) => Date.parse(x.at) >= after);
     if (m) return m;
