@@ -159,6 +159,12 @@ describe("the Content-Security-Policy in the browser", () => {
     ])
       await visit(page, path);
 
+    // The Captured mail page reads the mail fake server-side with the stack's token (a wrong or
+    // missing token would show the "not running" alert instead of the list or its empty state).
+    await visit(page, "/admin/mail");
+    expect(await page.getByText("The mail fake is not running").count()).toBe(0);
+    expect(await page.getByText(/No mail yet|To .*@/).count()).toBeGreaterThan(0);
+
     // A work's page and a statement's trail graph (@xyflow) when the corpus has them.
     await visit(page, "/works");
     const work = await page
