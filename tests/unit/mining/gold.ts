@@ -93,8 +93,13 @@ export function score(t: Tally, excerpt: GoldExcerpt, predicted: Statement[], la
     else t.errors.push(`${label} ${excerpt.id} VALUE ${g.statistic} got ${hit.p.value} want ${g.value} | ${text}`);
     if (g.statistic_label) {
       t.labelN++;
-      const got = (hit.p.statistic_label ?? "").toLowerCase().replace(/[’]/g, "'");
-      if (got === g.statistic_label.toLowerCase()) t.labelOk++;
+      // underscores stand for spaces in the gold sources, so both are read alike
+      const norm = (x: string) =>
+        x
+          .toLowerCase()
+          .replace(/[’]/g, "'")
+          .replace(/[_\s]+/g, " ");
+      if (norm(hit.p.statistic_label ?? "") === norm(g.statistic_label)) t.labelOk++;
       else
         t.errors.push(`${label} ${excerpt.id} LABEL got ${hit.p.statistic_label} want ${g.statistic_label} | ${text}`);
     }
