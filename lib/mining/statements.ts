@@ -31,7 +31,16 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\b(?:decrease|drop|change|difference|increase)s? in (?:the )?CFI\b|ΔCFI|∆CFI/g, "other"],
   [/\bfirst[-–\s]stage F(?:[-\s]statistics?|[-\s]values?)?/gi, "first_stage_f"],
   [/\bp[-\s]values?\b/gi, "p_value", { significance: true }],
-  [/\bsignificance (?:tests?|testing)\b/gi, "p_value", { significance: true }],
+  [
+    /\bp\b(?=\s+(?:(?:was|is|were|are|values?)\s+)?(?:less than|lower than|smaller than|below|under|at or below|not exceeding|≤|<))/gi,
+    "p_value",
+    { significance: true },
+  ],
+  [
+    /\bsignificance (?:tests?|testing|thresholds?|cut[-\s]?offs?|criteri(?:on|a))\b|\b(?:threshold|cut[-\s]?off|criterion) (?:for|of) (?:statistical )?significance\b/gi,
+    "p_value",
+    { significance: true },
+  ],
   [
     /\bCohen['’]?s\s+(?:K|κ)\b|\bK\b(?=\s*(?:=|of\b|above|below|values?|>|<|≥|≤|was|were|exceed|under|over|less|greater|higher|lower|for\b))/g,
     "cohen_kappa",
@@ -58,7 +67,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
     "minimum_sample_size",
   ],
   [
-    /\b(?:Mardia|Durbin[-–]Watson|Bartlett|Box|Levene|Hoelter|Gini|Moran|Harman)['’]?s?\s+(?:normali[sz]ed\s+)?(?:multivariate\s+)?(?:coefficient|statistic|index|critical N|value|test statistic|kurtosis)\b|\bcondition ind(?:ex|ices)\b|\bexpected (?:cell )?(?:counts?|frequenc(?:y|ies))\b|\bmean inter[-–]item correlations?\b|\binter[-–]item correlations?\b|\bcritical ratios?\b|\bDurbin[-–]Watson\b/gi,
+    /\b(?:Mardia|Durbin[-–]Watson|Bartlett|Box|Levene|Hoelter|Gini|Moran|Harman)['’]?s?\s+(?:normali[sz]ed\s+)?(?:multivariate\s+)?(?:coefficient|statistic|index|critical N|value|test statistic|kurtosis)\b|\bcondition ind(?:ex|ices)\b|\bexpected (?:cell )?(?:counts?|frequenc(?:y|ies))\b|\bmean inter[-–]item correlations?\b|\binter[-–]item correlations?\b|\bcritical ratios?\b|\bDurbin[-–]Watson\b|\bstandardi[sz]ed residuals?\b|\bresidual covariances?\b|\bmodification ind(?:ex|ices)\b|\bMahalanobis distances?\b|\bCook['’]?s distances?\b|\bleverage values?\b|\bz[-\s]scores?\b|\bcommunalit(?:y|ies)\b|\binter[-–]factor correlations?\b/gi,
     "other",
   ],
   [/\bcorrected item[-–\s]total correlations?|\bitem[-–\s](?:total|rest) correlations?/gi, "item_total_correlation"],
@@ -165,6 +174,17 @@ const DISPUTE_CUE = new RegExp(
     "abandon\\w*|retire[ds]? the",
     "doubled|inflated (?:type I|error)",
     "overlooks?|ignores? (?:the )?(?:fact|context|purpose)",
+    "never (?:\\w+ ){0,2}(?:proposed|intended|meant|designed|suggested|validated) (?:as|to be|for)",
+    "(?:no longer |not |in)defensible",
+    "contrary to (?:popular|common|widespread|conventional) (?:belief|wisdom|practice|opinion)",
+    "not (?:a |an )?(?:safe|reliable|valid|sufficient|adequate|meaningful|good) (?:\\w+ )?(?:bound|guide|rule|criterion|cut-?off|threshold|limit|indicator|standard|yardstick)",
+    "(?:do|did|does) not (?:follow|adopt|endorse|use|apply) the (?:\\w+ )?(?:common|usual|conventional|traditional|standard|popular)",
+    "(?:depart|deviate)s? from the (?:\\w+ )?(?:common|usual|conventional|traditional)",
+    "too many (?:correct|true|good|valid|acceptable)|too few (?:\\w+ )?(?:incorrect|false|misspecified)",
+    "without (?:considering|regard to|any justification|justification|thinking)",
+    "overly (?:strict|lenient|liberal|conservative|stringent|simplistic)",
+    "(?:widely|commonly|often|frequently) (?:misused|misapplied|misunderstood|abused)",
+    "(?:lacks?|without) (?:empirical|theoretical|statistical) (?:support|grounding|foundation)",
   ].join("|"),
   "i",
 );
@@ -181,7 +201,7 @@ const BLOCKER =
   /(?:(?<![\/\w])(?:t|F|z|r|b|B|β|γ|d|g|OR|IRR|HR|RR|SE|SD|M|N|n|df|Mdn|χ²|χ2|W|U|H)\s*(?:\([^)]*\))?\s*[=<>≤≥]\s*[-−–]?$|\bodds ratio (?:of\s*)?$|\beffect size (?:of\s*)?$|\b(?:9[059]|99)\s*%\s*CI\s*\[?$|\bCI\s*\[?$|\bmedian\s*$|\bmean(?: age)?(?: of)?\s*$|\baged?\s*$)/;
 
 const CUT_NOUN =
-  /(?:threshold|cut[-\s]?off|criterion|minimum|maximum|benchmark|rule of thumb|(?:recommended|required|acceptable|minimum|common|conventional|usual) (?:value|level|limit)|\blimit\b)/i;
+  /(?:threshold|cut[-\s]?off|criterion|minimum|maximum|benchmark|rule of thumb|(?:recommended|required|acceptable|minimum|common|conventional|usual) (?:value|level|limit)|\blimit\b|(?:upper|lower) bound)/i;
 const RANGE_OF =
   /\b(?:within|in|inside)\s+(?:the\s+)?(?:[\w-]+\s+){0,2}(?:range|band|interval)\s+(?:of|between|from)\s*$/i;
 const PLANNING =
@@ -193,7 +213,7 @@ const OBTAINED =
 // "a ratio of five to one", "a 5:1 ratio".
 const NUMBER_WORDS = "one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|fifteen|twenty|thirty|forty|fifty";
 const RATIO_FORMS = new RegExp(
-  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio`,
+  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
   "gi",
 );
 function ratioValue(text: string | undefined): number | null {
@@ -294,6 +314,10 @@ const THRESHOLD_CUE = new RegExp(
     "planned",
     "a priori",
     "targeted",
+    "evaluat\\w* (?:using|with|against|by|according)",
+    "assessed (?:using|with|against|by|according)",
+    "criteria",
+    "indicated by",
   ].join("|"),
   "i",
 );
@@ -536,10 +560,15 @@ export function extractStatements(
   if (ILLUSTRATION.test(s)) return finish(out, []);
 
   const disputed = DISPUTE_CUE.test(s);
-  const sentenceThreshold =
-    THRESHOLD_CUE.test(s) || (disputed && CUT_NOUN_AFTER.test(s)) || (disputed && CUT_NOUN.test(s));
-  const sentenceReported = REPORTED_CUE.test(s);
   const levelWords = new Set([...s.matchAll(LEVEL_WORDS)].map((m) => m[1].toLowerCase()));
+  // "f² values of 0.02, 0.15 and 0.35 represent small, medium and large effects": a graded scale
+  const gradedValues =
+    levelWords.size >= 2 &&
+    /(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) &&
+    !/\b(?:was|were|obtained|observed|yielded)\b/i.test(s);
+  const sentenceThreshold =
+    THRESHOLD_CUE.test(s) || (disputed && (CUT_NOUN_AFTER.test(s) || CUT_NOUN.test(s))) || gradedValues;
+  const sentenceReported = REPORTED_CUE.test(s);
   const contextual = CONTEXT_CUE.test(s) || levelWords.size >= 2;
   const framing = disputed ? "disputed" : contextual ? "contextual" : "fixed";
   const hasCitation = ctx.hasCitation ?? /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
@@ -551,7 +580,7 @@ export function extractStatements(
 
   // sample-size ratios: "10 respondents per indicator", "ratio of 10:1"
   for (const m of s.matchAll(RATIO_FORMS)) {
-    const value = ratioValue(m[1] ?? m[2] ?? m[3]);
+    const value = ratioValue(m[1] ?? m[2] ?? m[3] ?? m[4]);
     if (value === null) continue;
     const gap = s.slice(Math.max(0, m.index! - 40), m.index!);
     const thr = !/\b(?:was|were)\s*$/i.test(gap) && sentenceThreshold;
@@ -705,7 +734,8 @@ export function extractStatements(
       )
         continue;
       // an effect size given with its test ("d = 0.21, p = .04") is a result, like the p-value beside it
-      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d/.test(s)) continue;
+      // (and the d assumed in a power analysis is neither a rule nor a result)
+      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d|\bpower\b|\bto detect\b/i.test(s)) continue;
       // a named statistic of no tracked kind counts only with a rule or a plain "was"/"=" value
       if (g.generic && !sentenceThreshold && !/(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap)) continue;
       // "an alpha level of .70": a significance level is never that large, so it is a scale's alpha
@@ -730,6 +760,14 @@ export function extractStatements(
       if (key === "minimum_sample_size" ? value < 2 || value > 1e6 : !BOUNDED.has(key) && (value < 0 || value > 1000))
         continue;
       if (key === "minimum_sample_size" && !sentenceThreshold) continue;
+      // a sample's own size is not a statistic; only the minimum asked for counts
+      if (
+        key === "minimum_sample_size" &&
+        !/minimum/i.test(s.slice(g.start, g.end)) &&
+        /(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap) &&
+        !CUT_BEFORE.test(gap)
+      )
+        continue;
       if (key === "statistical_power" && value < 0.5) continue;
 
       let comparator = comparatorBefore(gap) ?? comparatorAfter(after);
@@ -764,7 +802,8 @@ export function extractStatements(
           !CUT_NOUN.test(s.slice(g.end, n.start)) &&
           !withinRange &&
           !rangeEndOfRecommended) ||
-        /\branged? (?:from|between)\b/i.test(s.slice(mention.end, n.start))
+        (/\branged? (?:from|between)\b/i.test(s.slice(mention.end, n.start)) &&
+          !CUT_NOUN.test(s.slice(mention.end, n.start)))
       )
         continue;
       if (continuesList && prevSame) {
@@ -782,6 +821,20 @@ export function extractStatements(
       )
         kind = "threshold";
       else if (cutBefore) kind = "threshold";
+      else if (disputed && !/(?:=|\bwas|\bwere)\s*$/i.test(gap) && !OBTAINED.test(s.slice(clauseStart, g.start)))
+        kind = "threshold";
+      // "The alpha of .85 was considered good": one obtained value, interpreted; not a rule
+      else if (
+        /^\s*(?:of|was|were|is|=)\s*$/i.test(gap) &&
+        /\b(?:the|our|its|their)\s+(?:[\w'’-]+\s+){0,2}$/i.test(s.slice(clauseStart, g.start)) &&
+        !/\b(?:recommend\w*|required|minimum|maximum|conventional|accepted|common|traditional|usual|desired|target|acceptable|critical)\b/i.test(
+          s.slice(Math.max(clauseStart, g.start - 40), g.start),
+        ) &&
+        !/s$|values?$/i.test(s.slice(g.start, g.end)) &&
+        !comparatorAfter(after) &&
+        !CUT_NOUN.test(s.slice(n.end, n.end + 40))
+      )
+        kind = "reported";
       else if (OBTAINED.test(s.slice(clauseStart, g.start)) && !disputed) kind = "reported";
       else if (relationToCut) kind = "reported";
       else if (comparator === "=" && /(?:=|\bwas|\bwere)\s*$/i.test(gap)) kind = "reported";
@@ -810,7 +863,7 @@ export function extractStatements(
         (prevNum &&
           /^\s*(?:and|to|[-–])\s*$/i.test(prevGap) &&
           /\b(?:between|from)\s*$/i.test(s.slice(Math.max(0, prevNum.start - 12), prevNum.start))) ||
-        (prevNum && /^\s*to\s*$/i.test(prevGap));
+        (prevNum && /^\s*(?:to|[-–])\s*$/i.test(prevGap));
       if (
         kind === "reported" &&
         ((rangeBefore && rangeAfter) || isRangeEnd || /\branged?\b/i.test(s.slice(g.end, n.start)))
