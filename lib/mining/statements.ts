@@ -107,6 +107,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
     /\b(?:(?:standardi[sz]ed|factor|indicator|outer|primary|item)\s+)?(?:cross[-–])?loadings?\b|\bloaded\b|\bload\b/gi,
     "factor_loading",
   ],
+  [/\btest[-–\s]retest (?:reliabilit(?:y|ies)|correlations?|coefficients?)/gi, "other"],
   [/\b(?:reliability coefficients?|internal consistency|reliability)\b/gi, "cronbach_alpha", { weak: true }],
 ];
 
@@ -202,6 +203,16 @@ const BLOCKER =
 
 const CUT_NOUN =
   /(?:threshold|cut[-\s]?off|criterion|minimum|maximum|benchmark|rule of thumb|(?:recommended|required|acceptable|minimum|common|conventional|usual) (?:value|level|limit)|\blimit\b|(?:upper|lower) bound)/i;
+const EVALUATIVE =
+  /\b(?:acceptable|adequate|sufficient|satisfactory|unproblematic|good fit|close fit|desirable|suffic\w+|excellent|good|high|strong)\b/gi;
+// A generic subject makes a rule even in the past tense: "values above .70 were acceptable".
+const GENERIC_VALUES =
+  /\b(?:values?|coefficients?|loadings?|estimates?|scores?)\s+(?:of|above|below|greater|less|lower|higher|over|under|between|exceeding|at or|equal to|as low as|as high as|up to|≥|≤|>|<)/i;
+function genericValues(s: string): boolean {
+  const m = GENERIC_VALUES.exec(s);
+  // "… was satisfactory, with alpha values between .74 and .88" describes the data
+  return !!m && !/\bwith\s+(?:[\w'’-]+\s+){0,3}$/i.test(s.slice(Math.max(0, m.index - 40), m.index));
+}
 const RANGE_OF =
   /\b(?:within|in|inside)\s+(?:the\s+)?(?:[\w-]+\s+){0,2}(?:range|band|interval)\s+(?:of|between|from)\s*$/i;
 const PLANNING =
@@ -255,7 +266,7 @@ const THRESHOLD_CUE = new RegExp(
     "taken (?:to|as)",
     "treated as",
     "interpreted",
-    "indicat(?:e|es|ing)",
+    "indicat(?:e|es|ing)\\b",
     "suggest\\w*",
     "signals?",
     "criteri\\w+",
@@ -566,8 +577,14 @@ export function extractStatements(
     levelWords.size >= 2 &&
     /(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) &&
     !/\b(?:was|were|obtained|observed|yielded)\b/i.test(s);
+  // Evaluative words alone ("was satisfactory, with alphas between .74 and .88") describe a result
+  // when the sentence speaks in the past of its own data; a rule needs more than praise.
+  const ruleCue =
+    THRESHOLD_CUE.test(s.replace(EVALUATIVE, " ")) ||
+    genericValues(s) ||
+    !/\b(?:was|were|had|showed|yielded|exhibited|indicated|suggested|demonstrated|confirmed|revealed)\b/i.test(s);
   const sentenceThreshold =
-    THRESHOLD_CUE.test(s) || (disputed && (CUT_NOUN_AFTER.test(s) || CUT_NOUN.test(s))) || gradedValues;
+    (THRESHOLD_CUE.test(s) && ruleCue) || (disputed && (CUT_NOUN_AFTER.test(s) || CUT_NOUN.test(s))) || gradedValues;
   const sentenceReported = REPORTED_CUE.test(s);
   const contextual = CONTEXT_CUE.test(s) || levelWords.size >= 2;
   const framing = disputed ? "disputed" : contextual ? "contextual" : "fixed";
@@ -613,7 +630,7 @@ export function extractStatements(
 
   const pCut = /\bp\s*(<|≤|<=|=)\s*(0?\.\d+)/gi;
   const pThresholdSentence =
-    /\b(?:consider|regard|deem|treat|accept|defin|interpret|judg|tak)\w*|\bas (?:marginally )?significant\b|\bset (?:at|to)\b|\bused as\b|\badopted\b|\bthresholds?\b|\bcut[-\s]?offs?\b|\bcriteri\w+|\bconvention\w*|\bto (?:show|indicate|denote)\b|\bsignifican\w+ (?:level|threshold)|\blevel of significance|\bsignificance level|\balpha level|\btwo[-\s](?:tailed|sided)\b/i.test(
+    /\b(?:consider|regard|deem|treat|accept|defin|interpret|judg|tak)\w*|\bas (?:marginally )?significant\b|\bset (?:at|to)\b|\bused as\b|\badopted\b|\bthresholds?\b|\bcut[-\s]?offs?\b|\bcriteri\w+|\bconvention\w*|\bto (?:show|indicate|denote)\b|\bsignifican\w+ (?:level|threshold)|\blevel of significance|\bsignificance level|\balpha level|\btwo[-\s](?:tailed|sided)\b|\b(?:was|were) (?:used|applied|employed|chosen)\b|\bBonferroni\b|\b(?:corrected|adjusted) (?:alpha|α|significance|p)\b/i.test(
       s,
     ) || disputed;
   for (const m of s.matchAll(pCut)) {
@@ -821,6 +838,18 @@ export function extractStatements(
       )
         kind = "threshold";
       else if (cutBefore) kind = "threshold";
+      // "Two image items with loadings of 0.38 and 0.41 were removed": item-level values, neither a
+      // rule nor a result of the scale
+      else if (
+        /^\s*(?:of|=|and|,|,\s*and)\s*$/i.test(gap) &&
+        /^\s*(?:\d+|one|two|three|four|five|six|seven|eight|nine|ten)\s+(?:[\w-]+\s+)?(?:items?|indicators?|variables?|questions?)\b/i.test(
+          s,
+        )
+      )
+        continue;
+      // "The R² values for intention (0.52) and behaviour (0.31)"
+      else if (/[\p{L})]\s*\(\s*$/u.test(before) && /^\s*[),;]/.test(after) && /\bfor\b/i.test(s.slice(g.end, n.start)))
+        kind = "reported";
       else if (disputed && !/(?:=|\bwas|\bwere)\s*$/i.test(gap) && !OBTAINED.test(s.slice(clauseStart, g.start)))
         kind = "threshold";
       // "The alpha of .85 was considered good": one obtained value, interpreted; not a rule
