@@ -738,6 +738,23 @@ export function extractStatements(
     const gap = s.slice(gapStart, n.start);
     const after = s.slice(n.end, n.end + 60);
 
+    // A reported range ("alphas ranged from .78 to .92") reports its two ends as obtained values.
+    const pushRangeEnd = (k: StatisticKey, v: number) => {
+      const prevEnd = prevNum ? s.slice(prevNum.end, n.start) : "";
+      const twoEnded =
+        /^\s*(?:\([^)]*\)\s*)?(?:and|to|[-–])\s*[.\d]/.test(after) ||
+        /^\s*(?:\([^)]*\)\s*)?(?:and|to|[-–])\s*$/.test(prevEnd);
+      if (twoEnded && !n.percent)
+        cands.push({
+          kind: "reported",
+          statistic: k,
+          comparator: "=",
+          value: v,
+          framing: null,
+          procedure: null,
+          at: n.start,
+        });
+    };
     for (const g of group) {
       let key = g.key;
       let value = n.percent ? n.value / 100 : n.value;
@@ -821,8 +838,10 @@ export function extractStatements(
           !rangeEndOfRecommended) ||
         (/\branged? (?:from|between)\b/i.test(s.slice(mention.end, n.start)) &&
           !CUT_NOUN.test(s.slice(mention.end, n.start)))
-      )
+      ) {
+        pushRangeEnd(key, value);
         continue;
+      }
       if (continuesList && prevSame) {
         kind = prevSame.kind;
         if (kind === "reported" || !comparator || comparator === "=") comparator = prevSame.comparator;
@@ -896,8 +915,11 @@ export function extractStatements(
       if (
         kind === "reported" &&
         ((rangeBefore && rangeAfter) || isRangeEnd || /\branged?\b/i.test(s.slice(g.end, n.start)))
-      )
+      ) {
+        // only a range said to be one ("ranged between"): "values between .56 and .74 confirmed" is not
+        if (/\b(?:ranged?|ranging)\b/i.test(s.slice(g.end, n.start))) pushRangeEnd(key, value);
         continue;
+      }
       if (kind === "threshold" && withinRange) comparator = ">=";
       else if (kind === "threshold" && rangeEndOfRecommended) comparator = "<=";
       else if (kind === "threshold" && rangeBefore && rangeAfter) {
