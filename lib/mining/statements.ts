@@ -67,6 +67,10 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
     "minimum_sample_size",
   ],
   [
+    /\b(?:a minimum of|minimum of|at least|no fewer than|not fewer than|no less than|a sample of at least)(?=\s+\d[\d,]*\s+(?:participants|cases|respondents|subjects|observations|people|patients|students)\b(?!\s+(?:per|for each|for every)\b))/gi,
+    "minimum_sample_size",
+  ],
+  [
     /\b(?:Mardia|Durbin[-–]Watson|Bartlett|Box|Levene|Hoelter|Gini|Moran|Harman)['’]?s?\s+(?:normali[sz]ed\s+)?(?:multivariate\s+)?(?:coefficient|statistic|index|critical N|value|test statistic|kurtosis)\b|\bcondition ind(?:ex|ices)\b|\bexpected (?:cell )?(?:counts?|frequenc(?:y|ies))\b|\bmean inter[-–]item correlations?\b|\binter[-–]item correlations?\b|\bcritical ratios?\b|\bDurbin[-–]Watson\b|\bstandardi[sz]ed residuals?\b|\bresidual covariances?\b|\bmodification ind(?:ex|ices)\b|\bMahalanobis distances?\b|\bCook['’]?s distances?\b|\bleverage values?\b|\bz[-\s]scores?\b|\bcommunalit(?:y|ies)\b|\binter[-–]factor correlations?\b/gi,
     "other",
   ],
@@ -224,7 +228,7 @@ const OBTAINED =
 // "a ratio of five to one", "a 5:1 ratio".
 const NUMBER_WORDS = "one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|fifteen|twenty|thirty|forty|fifty";
 const RATIO_FORMS = new RegExp(
-  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
+  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses|events)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
   "gi",
 );
 function ratioValue(text: string | undefined): number | null {
@@ -325,6 +329,7 @@ const THRESHOLD_CUE = new RegExp(
     "planned",
     "a priori",
     "targeted",
+    "(?:is|are|was|were|be) needed",
     "evaluat\\w* (?:using|with|against|by|according)",
     "assessed (?:using|with|against|by|according)",
     "criteria",
@@ -600,7 +605,9 @@ export function extractStatements(
     const value = ratioValue(m[1] ?? m[2] ?? m[3] ?? m[4]);
     if (value === null) continue;
     const gap = s.slice(Math.max(0, m.index! - 40), m.index!);
-    const thr = !/\b(?:was|were)\s*$/i.test(gap) && sentenceThreshold;
+    const thr =
+      !/\b(?:was|were)\s*$/i.test(gap) &&
+      (sentenceThreshold || /\b(?:at least|a minimum of|minimum of|no fewer than|no less than)\s*$/i.test(gap));
     cands.push({
       kind: thr ? "threshold" : "reported",
       statistic: "sample_size_ratio",
@@ -690,8 +697,8 @@ export function extractStatements(
   for (let ni = 0; ni < nums.length; ni++) {
     const n = nums[ni];
     if (
-      /^\s*(?:%\s*)?(?:power|cases|respondents|participants|observations|subjects|people)\b/i.test(
-        s.slice(n.end, n.end + 20),
+      /^\s*(?:%\s*)?(?:power\b|(?:cases|respondents|participants|observations|subjects|people|events)\s+(?:per|for each|for every)\b)/i.test(
+        s.slice(n.end, n.end + 30),
       )
     )
       continue;
