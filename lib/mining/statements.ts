@@ -570,6 +570,16 @@ export function extractStatements(
     // "A more liberal cut-off of 0.90 can be used …" continues the statistic of the sentence before.
     const m = CUT_NOUN.exec(s);
     if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
+  } else if (
+    !mentions.length &&
+    ctx.previousStatistic &&
+    ctx.previousStatistic !== "other" &&
+    THRESHOLD_CUE.test(s) &&
+    !/\b(?:items?|participants|respondents)\b/i.test(s)
+  ) {
+    // "Values above .90 indicate excellent fit." continues the statistic named just before.
+    const m = /\b(?:values?|coefficients?|estimates?)\b(?=[^.;]{0,30}?\d)/i.exec(s);
+    if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
   }
   const nums = findNumbers(s).filter((n) => !mentions.some((m) => n.start >= m.start && n.start < m.end));
   // Worked examples and definitions explain a value; they assert no cut-off and report nothing.
