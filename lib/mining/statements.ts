@@ -2,21 +2,78 @@
 // Rules are hand-written from the trade's wording; the gold set in tests/fixtures/gold measures them.
 import type { Comparator, StatisticKey } from "./contract";
 import type { ProcedurePattern } from "./procedures";
+import { readNumbers, readRatios } from "./numbers";
 
 export type RawStatement = {
   kind: "threshold" | "reported" | "procedure";
   statistic: StatisticKey | null;
   comparator: Comparator | null;
   value: number | null;
-  framing: "fixed" | "contextual" | null;
+  framing: "fixed" | "contextual" | "disputed" | null;
   procedure: string | null;
+  /** The statistic's name as written when `statistic` is "other" ("expected cell count"). */
+  statistic_label?: string | null;
 };
 
-type Mention = { start: number; end: number; key: StatisticKey; weak?: boolean; significance?: boolean };
+type MentionFlags = {
+  weak?: boolean;
+  significance?: boolean;
+  /** a generic name ("expected cell count"): used only when the sentence names no tracked statistic */
+  generic?: boolean;
+  /** the sentence must match this for the name to count ("K" is kappa only where agreement is meant) */
+  needs?: RegExp;
+};
+type Mention = { start: number; end: number; key: StatisticKey; label?: string } & MentionFlags;
 
 // Order matters: longer, more specific names first; matched spans are not re-used.
-const LEXICON: [RegExp, StatisticKey, { weak?: boolean; significance?: boolean }?][] = [
+const AGREEMENT = /\b(?:agree\w*|raters?|coders?|coding|kappa|inter-?rater|inter-?coder|reliabilit\w+)\b/i;
+const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\b(?:decrease|drop|change|difference|increase)s? in (?:the )?CFI\b|ΔCFI|∆CFI/g, "other"],
+  [/\bfirst[-–\s]stage F(?:[-\s]statistics?|[-\s]values?)?/gi, "first_stage_f"],
+  [/\bp[-\s]values?\b/gi, "p_value", { significance: true }],
+  [
+    /\bp\b(?=\s+(?:(?:was|is|were|are|values?)\s+)?(?:less than|lower than|smaller than|below|under|at or below|not exceeding|≤|<))/gi,
+    "p_value",
+    { significance: true },
+  ],
+  [
+    /\bsignificance (?:tests?|testing|thresholds?|cut[-\s]?offs?|criteri(?:on|a))\b|\b(?:threshold|cut[-\s]?off|criterion) (?:for|of) (?:statistical )?significance\b/gi,
+    "p_value",
+    { significance: true },
+  ],
+  [
+    /\bCohen['’]?s\s+(?:K|κ)\b|\bK\b(?=\s*(?:=|of\b|above|below|values?|>|<|≥|≤|was|were|exceed|under|over|less|greater|higher|lower|for\b))/g,
+    "cohen_kappa",
+    { needs: AGREEMENT },
+  ],
+  [
+    /\bCohen['’]?s\s+d\b|\b(?:standardi[sz]ed mean difference|effect size d)\b|\bd(?=\s*[=≥≤]\s*[-−]?\d*\.?\d)/g,
+    "cohen_d",
+  ],
+  [/\b(?:Cohen['’]?s\s+)?f\s*²|\bf\^2|\bf-squared|\bf2\b(?!\s*=)/g, "f_squared"],
+  [/\b(?:Stone[-–]Geisser(?:['’]s)?\s+)?Q\s*²|\bQ2\b|\bQ-squared|\bStone[-–]Geisser\b/g, "q_squared"],
+  [
+    /\btolerance(?:\s+(?:values?|statistics?|levels?))?\b/gi,
+    "tolerance",
+    {
+      needs:
+        /\b(?:collinear\w*|multicollinear\w*|VIF|tolerance (?:values?|statistics?)|lowest tolerance|tolerance (?:was|were|of|below|above|less|greater|under|should|must))\b/i,
+    },
+  ],
+  [/\bskew(?:ness)?(?:\s+values?)?\b/gi, "skewness"],
+  [/\bkurtosis(?:\s+values?)?\b/gi, "kurtosis", { needs: /^(?![\s\S]*\bMardia)/ }],
+  [
+    /\bminimum sample sizes?\b|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
+    "minimum_sample_size",
+  ],
+  [
+    /\b(?:a minimum of|minimum of|at least|no fewer than|not fewer than|no less than|a sample of at least)(?=\s+\d[\d,]*\s+(?:participants|cases|respondents|subjects|observations|people|patients|students)\b(?!\s+(?:per|for each|for every)\b))/gi,
+    "minimum_sample_size",
+  ],
+  [
+    /\b(?:Mardia|Durbin[-–]Watson|Bartlett|Box|Levene|Hoelter|Gini|Moran|Harman)['’]?s?\s+(?:normali[sz]ed\s+)?(?:multivariate\s+)?(?:coefficient|statistic|index|critical N|value|test statistic|kurtosis)\b|\bcondition ind(?:ex|ices)\b|\bexpected (?:cell )?(?:counts?|frequenc(?:y|ies))\b|\bmean inter[-–]item correlations?\b|\binter[-–]item correlations?\b|\bcritical ratios?\b|\bDurbin[-–]Watson\b|\bstandardi[sz]ed residuals?\b|\bresidual covariances?\b|\bmodification ind(?:ex|ices)\b|\bMahalanobis distances?\b|\bCook['’]?s distances?\b|\bleverage values?\b|\bz[-\s]scores?\b|\bcommunalit(?:y|ies)\b|\binter[-–]factor correlations?\b/gi,
+    "other",
+  ],
   [/\bcorrected item[-–\s]total correlations?|\bitem[-–\s](?:total|rest) correlations?/gi, "item_total_correlation"],
   [/\bcomposite reliability|\bconstruct reliability|\bCR\b/gi, "composite_reliability"],
   [
@@ -54,10 +111,20 @@ const LEXICON: [RegExp, StatisticKey, { weak?: boolean; significance?: boolean }
     /\b(?:(?:standardi[sz]ed|factor|indicator|outer|primary|item)\s+)?(?:cross[-–])?loadings?\b|\bloaded\b|\bload\b/gi,
     "factor_loading",
   ],
+  [/\btest[-–\s]retest (?:reliabilit(?:y|ies)|correlations?|coefficients?)/gi, "other"],
   [/\b(?:reliability coefficients?|internal consistency|reliability)\b/gi, "cronbach_alpha", { weak: true }],
 ];
 
-const HIGHER_IS_WORSE = new Set<StatisticKey>(["rmsea", "srmr", "vif", "chi_square_df", "p_value", "htmt"]);
+const HIGHER_IS_WORSE = new Set<StatisticKey>([
+  "rmsea",
+  "srmr",
+  "vif",
+  "chi_square_df",
+  "p_value",
+  "htmt",
+  "skewness",
+  "kurtosis",
+]);
 const BOUNDED = new Set<StatisticKey>([
   "cronbach_alpha",
   "mcdonald_omega",
@@ -76,18 +143,109 @@ const BOUNDED = new Set<StatisticKey>([
   "r_squared",
   "item_total_correlation",
   "statistical_power",
+  "tolerance",
 ]);
+/** Keys whose values are counts of cases ("at least 200 participants"): a count is their value. */
+const COUNT_KEYS = new Set<StatisticKey>(["minimum_sample_size", "sample_size_ratio"]);
+
+// The sentence names the cut-off in order to argue against it (framing "disputed"). Cues from the
+// trade's critical literature; a cue inside the same clause as a negation of it ("not arbitrary") is
+// rare enough to ignore.
+const DISPUTE_CUE = new RegExp(
+  [
+    "criticis\\w*|criticiz\\w*|critique[sd]?",
+    "arbitrar\\w*",
+    "myths?|folklore|legends?|lore\\b",
+    "no (?:\\w+ ){0,2}(?:basis|justification|rationale|foundation|grounds?|support|evidence for)",
+    "little (?:\\w+ )?(?:basis|justification|rationale|support)",
+    "lacks? (?:a |any )?(?:\\w+ )?(?:basis|justification|rationale|foundation)",
+    "(?:is|are|was|were|remains?) (?:not |un)?(?:justified|unjustified|unfounded|baseless)",
+    "unfounded|baseless|unwarranted|dubious|questionable (?:rule|practice|convention)",
+    "let(?:s)? through|lets? pass|fail(?:s|ed)? to (?:detect|flag|catch|protect|guard|prevent)",
+    "misleading|mislead\\w*|misread\\w*|misinterpret\\w*|misus\\w*|misappl\\w*|misquot\\w*|misattribut\\w*",
+    "(?:should|must|cannot|can ?not|need not) (?:not )?be (?:applied|used|treated|taken|followed|interpreted) (?:mechanically|blindly|uncritically|as (?:a )?(?:universal|golden|hard|absolute))",
+    "mechanically|blindly|uncritical(?:ly)?|ritual\\w*|dogma\\w*|superstition|mindless\\w*",
+    "(?:golden|magic(?:al)?) (?:rule|number|cut-?off|threshold|value)",
+    "so-called",
+    "(?:has|have|had) been (?:\\w+ )?(?:questioned|challenged|disputed|debunked|criticised|criticized|contested|refuted|discredited|attacked)",
+    "(?:we|authors?|they|others?) (?:\\w+ )?(?:argue[sd]?|warn(?:ed|s)?|caution(?:ed|s)?) against",
+    "(?:argue[sd]?|warn(?:ed|s)?|caution(?:ed|s)?) against",
+    "not (?:a )?(?:universal|sacrosanct|magic|law)",
+    "one[- ]size[- ]fits[- ]all",
+    "(?:too|overly) (?:lenient|liberal|permissive|crude|simplistic)",
+    "(?:rule|cut-?off|threshold|convention)s? (?:of thumb )?(?:has|have|had) no\\b",
+    "does not guarantee|do not guarantee|no guarantee",
+    "habit\\b|by habit|out of habit|convenience rather",
+    "abandon\\w*|retire[ds]? the",
+    "doubled|inflated (?:type I|error)",
+    "overlooks?|ignores? (?:the )?(?:fact|context|purpose)",
+    "never (?:\\w+ ){0,2}(?:proposed|intended|meant|designed|suggested|validated) (?:as|to be|for)",
+    "(?:no longer |not |in)defensible",
+    "contrary to (?:popular|common|widespread|conventional) (?:belief|wisdom|practice|opinion)",
+    "not (?:a |an )?(?:safe|reliable|valid|sufficient|adequate|meaningful|good) (?:\\w+ )?(?:bound|guide|rule|criterion|cut-?off|threshold|limit|indicator|standard|yardstick)",
+    "(?:do|did|does) not (?:follow|adopt|endorse|use|apply) the (?:\\w+ )?(?:common|usual|conventional|traditional|standard|popular)",
+    "(?:depart|deviate)s? from the (?:\\w+ )?(?:common|usual|conventional|traditional)",
+    "too many (?:correct|true|good|valid|acceptable)|too few (?:\\w+ )?(?:incorrect|false|misspecified)",
+    "without (?:considering|regard to|any justification|justification|thinking)",
+    "overly (?:strict|lenient|liberal|conservative|stringent|simplistic)",
+    "(?:widely|commonly|often|frequently) (?:misused|misapplied|misunderstood|abused)",
+    "(?:lacks?|without) (?:empirical|theoretical|statistical) (?:support|grounding|foundation)",
+  ].join("|"),
+  "i",
+);
+
+// Worked examples, definitions and conditionals that explain what a value means: not statements.
+const ILLUSTRATION =
+  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\branges? (?:from|between) [-−]?1 (?:to|and) \+?1\b/i;
+// Values that are the bounds of a statistic's scale ("kappa equals 1 for perfect agreement").
+const BOUND_MEANING =
+  /\b(?:perfect|complete|chance|worse than chance|no (?:agreement|association|relationship|correlation)|random|identical|independent|undefined|by chance)\b/i;
 
 // Numbers that belong to something that is not a tracked statistic: test statistics, descriptives, CIs.
 const BLOCKER =
   /(?:(?<![\/\w])(?:t|F|z|r|b|B|β|γ|d|g|OR|IRR|HR|RR|SE|SD|M|N|n|df|Mdn|χ²|χ2|W|U|H)\s*(?:\([^)]*\))?\s*[=<>≤≥]\s*[-−–]?$|\bodds ratio (?:of\s*)?$|\beffect size (?:of\s*)?$|\b(?:9[059]|99)\s*%\s*CI\s*\[?$|\bCI\s*\[?$|\bmedian\s*$|\bmean(?: age)?(?: of)?\s*$|\baged?\s*$)/;
 
 const CUT_NOUN =
-  /(?:threshold|cut[-\s]?off|criterion|minimum|maximum|benchmark|rule of thumb|recommended (?:value|level))/i;
+  /(?:threshold|cut[-\s]?off|criterion|minimum|maximum|benchmark|rule of thumb|(?:recommended|required|acceptable|minimum|common|conventional|usual) (?:value|level|limit)|\blimit\b|(?:upper|lower) bound)/i;
+const EVALUATIVE =
+  /\b(?:acceptable|adequate|sufficient|satisfactory|unproblematic|good fit|close fit|desirable|suffic\w+|excellent|good|high|strong)\b/gi;
+// A generic subject makes a rule even in the past tense: "values above .70 were acceptable".
+const GENERIC_VALUES =
+  /\b(?:values?|coefficients?|loadings?|estimates?|scores?)\s+(?:of|above|below|greater|less|lower|higher|over|under|between|exceeding|at or|equal to|as low as|as high as|up to|≥|≤|>|<)/i;
+function genericValues(s: string): boolean {
+  const m = GENERIC_VALUES.exec(s);
+  // "… was satisfactory, with alpha values between .74 and .88" describes the data
+  return !!m && !/\bwith\s+(?:[\w'’-]+\s+){0,3}$/i.test(s.slice(Math.max(0, m.index - 40), m.index));
+}
+const RANGE_OF =
+  /\b(?:within|in|inside)\s+(?:the\s+)?(?:[\w-]+\s+){0,2}(?:range|band|interval)\s+(?:of|between|from)\s*$/i;
+const PLANNING =
+  /\b(?:plan\w*|a priori|design\w*|target\w*|assum\w*|required|needed|to detect|sample size (?:calculation|estimation|determination)|used|set (?:at|to)|desired|aimed?)\b/i;
+const OBTAINED =
+  /\b(?:obtained|observed|achieved|resulting|our|in (?:our|this|the present) (?:data|sample|study)|lowest|highest|smallest|largest)\b/i;
+
+// Cases per parameter: "10 respondents per indicator", "ten cases for each item", "a ratio of 10:1",
+// "a ratio of five to one", "a 5:1 ratio".
+const NUMBER_WORDS = "one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|fifteen|twenty|thirty|forty|fifty";
+const RATIO_FORMS = new RegExp(
+  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses|events)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
+  "gi",
+);
+function ratioValue(text: string | undefined): number | null {
+  if (!text) return null;
+  const r = readRatios(text)[0];
+  if (r) return r.value;
+  const n = readNumbers(text)[0];
+  return n ? n.value : null;
+}
+
 // Built once: they were compiled anew for every number of every sentence.
+// A cut-off noun right after its number: "the arbitrary .70 rule", "the .05 convention".
+const CUT_NOUN_AFTER =
+  /(?:^|\s)[.\d]+\s+(?:\w+\s+)?(?:rule|convention|cut[-\s]?off|threshold|criterion|benchmark|limit|standard)\b/i;
 const CUT_BEFORE = new RegExp(`${CUT_NOUN.source}\\s*(?:of|at|is|was|value of)?\\s*(?:the\\s*)?$`, "i");
 const RELATION_TO_CUT = new RegExp(
-  `^[^.;]{0,45}?\\b(?:above|below|exceed\\w*|under|over|higher than|lower than)\\s+the\\b[^.;]{0,30}${CUT_NOUN.source}`,
+  `^[^.;]{0,45}?\\b(?:above|below|exceed\\w*|under|over|higher than|lower than|(?:falls?|falling|lies?|lying|is|was) within|meets?|meeting|satisf\\w+|surpass\\w*|beyond|in line with|well within)\\s+the\\b[^.;]{0,30}(?:${CUT_NOUN.source}|range)`,
   "i",
 );
 const THRESHOLD_CUE = new RegExp(
@@ -112,7 +270,7 @@ const THRESHOLD_CUE = new RegExp(
     "taken (?:to|as)",
     "treated as",
     "interpreted",
-    "indicat(?:e|es|ing)",
+    "indicat(?:e|es|ing)\\b",
     "suggest\\w*",
     "signals?",
     "criteri\\w+",
@@ -157,6 +315,25 @@ const THRESHOLD_CUE = new RegExp(
     "support invariance",
     "as significant",
     "to indicate",
+    "ought",
+    "convention\\w*",
+    "customar\\w*",
+    "accepted",
+    "desirable",
+    "suffic\\w+",
+    "treated",
+    "read as",
+    "classified",
+    "limits?\\b",
+    "used to plan",
+    "planned",
+    "a priori",
+    "targeted",
+    "(?:is|are|was|were|be) needed",
+    "evaluat\\w* (?:using|with|against|by|according)",
+    "assessed (?:using|with|against|by|according)",
+    "criteria",
+    "indicated by",
   ].join("|"),
   "i",
 );
@@ -166,6 +343,7 @@ const CONTEXT_CUE = new RegExp(
   [
     "(?:for|in) exploratory (?:research|studies|work|purposes|analys[ie]s|stages?)",
     "early stages?",
+    "early (?:work|research|phases?|development|versions?)",
     "depend\\w*",
     "(?:is|are|may be|can be) (?:still )?(?:acceptable|sufficient|adequate|tolerated)\\s+(?:if|when|provided|in|for)",
     "can be (?:used|tolerated|accepted|retained)",
@@ -189,16 +367,62 @@ const CONTEXT_CUE = new RegExp(
     "small samples",
     "conceptually similar",
     "although",
+    "(?:for|in) (?:clinical|applied|research|screening|diagnostic|individual|high-stakes|basic|confirmatory)\\b",
+    "for (?:group|individual)[- ]level",
+    "(?:with|for|in) (?:samples?|models?|scales?) (?:of|with|larger|smaller)",
+    "when (?:the )?(?:sample|model|number of|scale)",
+    "\\bif (?:the )?(?:sample|model|number of|scale|items?)",
+    "\\bideally\\b|\\bpreferably\\b",
+    "\\bN\\s*[<>≥≤]\\s*\\d",
+    "in (?:some|many|most) (?:fields|disciplines|contexts|cases|situations)",
   ].join("|"),
   "i",
 );
 const LEVEL_WORDS =
-  /\b(acceptable|good|reasonable|close|excellent|poor|moderate|substantial|weak|adequate|mediocre|marginal|almost perfect|fair)\b/gi;
+  /\b(acceptable|good|reasonable|close|excellent|poor|moderate|substantial|weak|adequate|mediocre|marginal|almost perfect|fair|small|medium|large|questionable|unacceptable|negligible|trivial|strong)\b/gi;
+
+// Significance α ("an alpha level of .05", "two-tailed tests") versus coefficient α of a scale
+// ("an alpha level of .70 as the criterion of internal consistency"): decided by the sentence.
+const RELIABILITY_CONTEXT =
+  /\b(?:reliab\w*|internal consistency|consisten\w*|scales?|subscales?|items?|questionnaire|instrument|inventory|index)\b/i;
+const SIGNIFICANCE_CONTEXT =
+  /\b(?:significan\w*|tests?|tailed|sided|hypothes[ie]s|null|type I|comparisons?|bonferroni|corrected|adjusted|p\s*[<=])/i;
+
+// A cut-off on some other named statistic: "the Gini coefficient", "Geary's ratio". The head noun
+// must carry a name (a possessive or a modifier that is not a generic word).
+const GENERIC_HEAD = /\b(coefficients?|indices|index|ratios?|statistics?)\b/g;
+const GENERIC_STOP = new Set(
+  "the a an this that these those its their our each all any every of for and or with in on to at by from as is was were are be its overall same mean average reliability correlation regression path beta standardized standardised unstandardized unstandardised fit test odds hazard risk likelihood cut-off cutoff threshold minimum maximum value values estimated obtained observed resulting corresponding respective final such high low higher lower model structural alpha omega kappa reliability validity stability agreement agreement".split(
+    " ",
+  ),
+);
+function genericMentions(s: string): Mention[] {
+  const out: Mention[] = [];
+  GENERIC_HEAD.lastIndex = 0;
+  for (let m = GENERIC_HEAD.exec(s); m; m = GENERIC_HEAD.exec(s)) {
+    const words = s
+      .slice(Math.max(0, m.index - 40), m.index)
+      .split(/\s+/)
+      .filter(Boolean);
+    const mods: string[] = [];
+    for (let i = words.length - 1; i >= 0 && mods.length < 3; i--) {
+      const w = words[i];
+      if (/[,.;:()]$/.test(w) || GENERIC_STOP.has(w.toLowerCase()) || /\d/.test(w)) break;
+      mods.unshift(w);
+    }
+    if (!mods.length) continue;
+    const label = `${mods.join(" ")} ${m[0]}`;
+    const start = m.index - (mods.join(" ").length + 1);
+    out.push({ start, end: m.index + m[0].length, key: "other", label, generic: true });
+  }
+  return out;
+}
 
 function findMentions(s: string): Mention[] {
   const taken = new Uint8Array(s.length);
   const out: Mention[] = [];
   for (const [re, key, flags] of LEXICON) {
+    if (flags?.needs && !flags.needs.test(s)) continue;
     // exec on the shared global pattern, not matchAll: matchAll clones the RegExp on every call, and
     // 23 clones per sentence were the miner's largest single cost (measured on 200 demo PDFs).
     re.lastIndex = 0;
@@ -207,37 +431,66 @@ function findMentions(s: string): Mention[] {
       const end = start + m[0].length;
       if (taken.subarray(start, end).includes(1)) continue;
       taken.fill(1, start, end);
-      out.push({ start, end, key, ...flags });
+      const mention: Mention = { start, end, key, ...flags };
+      if (key === "other") mention.label = m[0].trim();
+      // "alpha level": significance unless the sentence is about a scale's reliability
+      if (
+        flags?.significance &&
+        /alpha|α/i.test(m[0]) &&
+        RELIABILITY_CONTEXT.test(s) &&
+        !SIGNIFICANCE_CONTEXT.test(s)
+      ) {
+        mention.key = "cronbach_alpha";
+        mention.significance = false;
+      }
+      out.push(mention);
     }
   }
   out.sort((a, b) => a.start - b.start);
   const strong = out.filter((m) => !m.weak);
-  return strong.length ? strong : out;
+  if (strong.length) return strong;
+  if (out.length) return out;
+  return genericMentions(s).filter((g) => !taken.subarray(g.start, g.end).includes(1));
 }
 
-type Num = { start: number; end: number; value: number; raw: string; percent: boolean };
+type Num = { start: number; end: number; value: number; raw: string; percent: boolean; count: boolean; word: boolean };
 
+/** Values and counts of the sentence (lib/mining/numbers.ts); labels, list markers and citation numbers are dropped. */
 function findNumbers(s: string): Num[] {
-  const out: Num[] = [];
-  for (const m of s.matchAll(/(?<![\w.\/])[-−]?(?:\d{1,3}(?:,\d{3})+|\d+)?(?:\.\d+)?(?:\s*(%|percent))?(?![\w])/g)) {
-    const raw = m[0];
-    if (!/\d/.test(raw)) continue;
-    const percent = Boolean(m[1]);
-    const num = Number(
-      raw
-        .replace(/%|percent/g, "")
-        .replace(/,/g, "")
-        .replace("−", "-")
-        .trim(),
-    );
-    if (!Number.isFinite(num)) continue;
-    out.push({ start: m.index!, end: m.index! + raw.length, value: num, raw, percent });
-  }
-  return out;
+  return readNumbers(s)
+    .filter((n) => n.role === "value" || n.role === "count")
+    .map((n) => ({
+      start: n.start,
+      end: n.end,
+      value: n.value,
+      raw: n.raw,
+      percent: n.percent,
+      count: n.role === "count",
+      word: n.word,
+    }));
 }
+
+// Negated and reversed rules, read before the plain words: "should never drop below .7" asserts
+// >= .7, "must not exceed 5" asserts <= 5, "fail to reach .30" names a minimum of .30.
+const NEG = String.raw`(?:not|never|n['’]t|no)\s+(?:\w+\s+){0,2}?`;
+const NEGATED: [RegExp, Comparator][] = [
+  [
+    new RegExp(
+      String.raw`(?:${NEG}(?:be\s+)?(?:drop|fall|go|dip|sink|be)s?\s+(?:below|under|beneath|short of)|${NEG}(?:be\s+)?(?:lower|less|smaller|fewer|worse|weaker)\s+than|${NEG}(?:be\s+)?below|${NEG}under|fail(?:s|ed|ing)?\s+to\s+(?:reach|attain|achieve|meet|exceed)|(?:did|does|do)\s+not\s+(?:reach|attain|achieve|meet)|short of|ought\s+not\s+to\s+(?:fall|drop|go)\s+below)\s*(?:the\s*)?(?:value of\s*|level of\s*)?$`,
+    ),
+    ">=",
+  ],
+  [
+    new RegExp(
+      String.raw`(?:${NEG}(?:be\s+)?(?:exceed|surpass|go above|rise above|be above|above|over)\w*|${NEG}(?:be\s+)?(?:greater|higher|larger|more|bigger|stronger)\s+than|within\s*(?:the\s+range\s+(?:of\s+)?)?±)\s*(?:the\s*)?(?:value of\s*|level of\s*)?$`,
+    ),
+    "<=",
+  ],
+];
 
 function comparatorBefore(gap: string): Comparator | null {
   const g = gap.toLowerCase();
+  for (const [re, c] of NEGATED) if (re.test(g)) return c;
   const table: [RegExp, Comparator][] = [
     [
       /(?:≥|>=|at least|no less than|not less than|a minimum of|minimum of|min\.?|reach(?:ed)?|of at least)\s*(?:the\s*)?(?:value of\s*)?$/,
@@ -253,11 +506,12 @@ function comparatorBefore(gap: string): Comparator | null {
   for (const [re, c] of table) if (re.test(g)) return c;
   if (/(?:=)\s*$/.test(g)) return "=";
   // A cut-off noun with its verb further back: "exceeds the conventional threshold of 10".
-  const w = /(?:threshold|cut[-\s]?off|criterion|benchmark|minimum|maximum)\s*(?:of|at)?\s*$/.test(g)
-    ? /(not exceed|no more than|at least|minimum|maximum|exceed\w*|above|greater than|higher than|below|less than|lower than|under|smaller than)\b[^.;]*$/.exec(
-        g,
-      )
-    : null;
+  const w =
+    /(?:threshold|cut[-\s]?off|criterion|benchmark|minimum|maximum|level|limit|value|standard)\s*(?:of|at)?\s*$/.test(g)
+      ? /(not exceed|no more than|at least|minimum|maximum|exceed\w*|above|greater than|higher than|below|less than|lower than|under|smaller than)\b[^.;]*$/.exec(
+          g,
+        )
+      : null;
   if (w) {
     const word = w[1];
     if (/not exceed|no more than|maximum/.test(word)) return "<=";
@@ -265,7 +519,7 @@ function comparatorBefore(gap: string): Comparator | null {
     if (/exceed|above|greater|higher/.test(word)) return ">";
     return "<";
   }
-  if (/(?:was|were|is|are|of|reached)\s*$/.test(g)) return "=";
+  if (/(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?)\s*$/.test(g)) return "=";
   return null;
 }
 
@@ -324,13 +578,39 @@ export function extractStatements(
     // "A more liberal cut-off of 0.90 can be used …" continues the statistic of the sentence before.
     const m = CUT_NOUN.exec(s);
     if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
+  } else if (
+    !mentions.length &&
+    ctx.previousStatistic &&
+    ctx.previousStatistic !== "other" &&
+    THRESHOLD_CUE.test(s) &&
+    !/\b(?:items?|participants|respondents)\b/i.test(s)
+  ) {
+    // "Values above .90 indicate excellent fit." continues the statistic named just before.
+    const m = /\b(?:values?|coefficients?|estimates?)\b(?=[^.;]{0,30}?\d)/i.exec(s);
+    if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
   }
   const nums = findNumbers(s).filter((n) => !mentions.some((m) => n.start >= m.start && n.start < m.end));
+  // Worked examples and definitions explain a value; they assert no cut-off and report nothing.
+  if (ILLUSTRATION.test(s)) return finish(out, []);
 
-  const sentenceThreshold = THRESHOLD_CUE.test(s);
-  const sentenceReported = REPORTED_CUE.test(s);
+  const disputed = DISPUTE_CUE.test(s);
   const levelWords = new Set([...s.matchAll(LEVEL_WORDS)].map((m) => m[1].toLowerCase()));
+  // "f² values of 0.02, 0.15 and 0.35 represent small, medium and large effects": a graded scale
+  const gradedValues =
+    levelWords.size >= 2 &&
+    /(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) &&
+    !/\b(?:was|were|obtained|observed|yielded)\b/i.test(s);
+  // Evaluative words alone ("was satisfactory, with alphas between .74 and .88") describe a result
+  // when the sentence speaks in the past of its own data; a rule needs more than praise.
+  const ruleCue =
+    THRESHOLD_CUE.test(s.replace(EVALUATIVE, " ")) ||
+    genericValues(s) ||
+    !/\b(?:was|were|had|showed|yielded|exhibited|indicated|suggested|demonstrated|confirmed|revealed)\b/i.test(s);
+  const sentenceThreshold =
+    (THRESHOLD_CUE.test(s) && ruleCue) || (disputed && (CUT_NOUN_AFTER.test(s) || CUT_NOUN.test(s))) || gradedValues;
+  const sentenceReported = REPORTED_CUE.test(s);
   const contextual = CONTEXT_CUE.test(s) || levelWords.size >= 2;
+  const framing = disputed ? "disputed" : contextual ? "contextual" : "fixed";
   const hasCitation = ctx.hasCitation ?? /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
   const resultSig = isResultSignificance(s);
 
@@ -339,18 +619,19 @@ export function extractStatements(
   const usedValues = new Map<string, number>();
 
   // sample-size ratios: "10 respondents per indicator", "ratio of 10:1"
-  for (const m of s.matchAll(
-    /(\d+(?:\.\d+)?)\s+(?:cases|respondents|participants|observations|subjects|people)\s+(?:per|for each)\s+(?:estimated\s+)?(?:item|indicator|variable|parameter|predictor)s?|ratio of (\d+)\s*:\s*1/gi,
-  )) {
-    const value = Number(m[1] ?? m[2]);
+  for (const m of s.matchAll(RATIO_FORMS)) {
+    const value = ratioValue(m[1] ?? m[2] ?? m[3] ?? m[4]);
+    if (value === null) continue;
     const gap = s.slice(Math.max(0, m.index! - 40), m.index!);
-    const thr = !/\b(?:was|were)\s*$/i.test(gap) && sentenceThreshold;
+    const thr =
+      !/\b(?:was|were)\s*$/i.test(gap) &&
+      (sentenceThreshold || /\b(?:at least|a minimum of|minimum of|no fewer than|no less than)\s*$/i.test(gap));
     cands.push({
       kind: thr ? "threshold" : "reported",
       statistic: "sample_size_ratio",
       comparator: comparatorBefore(gap) === "=" || !comparatorBefore(gap) ? (thr ? ">=" : "=") : comparatorBefore(gap),
       value,
-      framing: thr ? (contextual ? "contextual" : "fixed") : null,
+      framing: thr ? framing : null,
       procedure: null,
       at: m.index!,
     });
@@ -366,7 +647,7 @@ export function extractStatements(
       statistic: "statistical_power",
       comparator: ">=",
       value,
-      framing: contextual ? "contextual" : "fixed",
+      framing,
       procedure: null,
       at: m.index!,
     });
@@ -374,9 +655,9 @@ export function extractStatements(
 
   const pCut = /\bp\s*(<|≤|<=|=)\s*(0?\.\d+)/gi;
   const pThresholdSentence =
-    /\b(?:consider|regard|deem|treat)\w*|\bas (?:marginally )?significant\b|\bset at\b|\bused as\b|\badopted\b/i.test(
+    /\b(?:consider|regard|deem|treat|accept|defin|interpret|judg|tak)\w*|\bas (?:marginally )?significant\b|\bset (?:at|to)\b|\bused as\b|\badopted\b|\bthresholds?\b|\bcut[-\s]?offs?\b|\bcriteri\w+|\bconvention\w*|\bto (?:show|indicate|denote)\b|\bsignifican\w+ (?:level|threshold)|\blevel of significance|\bsignificance level|\balpha level|\btwo[-\s](?:tailed|sided)\b|\b(?:was|were) (?:used|applied|employed|chosen)\b|\bBonferroni\b|\b(?:corrected|adjusted) (?:alpha|α|significance|p)\b/i.test(
       s,
-    );
+    ) || disputed;
   for (const m of s.matchAll(pCut)) {
     if (!pThresholdSentence) continue;
     cands.push({
@@ -384,7 +665,7 @@ export function extractStatements(
       statistic: "p_value",
       comparator: m[1] === "≤" || m[1] === "<=" ? "<=" : "<",
       value: Number(m[2]),
-      framing: contextual ? "contextual" : "fixed",
+      framing,
       procedure: null,
       at: m.index!,
     });
@@ -398,7 +679,29 @@ export function extractStatements(
       statistic: "p_value",
       comparator: "<",
       value: v,
-      framing: contextual ? "contextual" : "fixed",
+      framing,
+      procedure: null,
+      at: m.index!,
+    });
+  }
+
+  // "The predictors accounted for 27% of the variance": a reported R² of .27 (a factor's share of
+  // variance is not an R²).
+  for (const m of s.matchAll(
+    /\b(?:explain\w*|accounted for|accounts for|account for)\s+(?:only\s+|about\s+|approximately\s+|around\s+|nearly\s+|almost\s+|roughly\s+|some\s+)?(\d+(?:\.\d+)?)\s*(?:%|percent\b|per cent\b)\s+of\s+(?:the\s+)?(?:total\s+|overall\s+)?variance/gi,
+  )) {
+    const subject = s.slice(0, m.index);
+    if (/\b(?:factors?|components?|dimensions?|eigen\w*|ICC|intraclass|method)\b/i.test(subject)) continue;
+    const value = Number(m[1]) / 100;
+    const already =
+      mentions.some((x) => x.key === "r_squared") && nums.some((x) => !x.percent && Math.abs(x.value - value) < 1e-9);
+    if (already) continue;
+    cands.push({
+      kind: "reported",
+      statistic: "r_squared",
+      comparator: "=",
+      value,
+      framing: null,
       procedure: null,
       at: m.index!,
     });
@@ -412,13 +715,15 @@ export function extractStatements(
   for (let ni = 0; ni < nums.length; ni++) {
     const n = nums[ni];
     if (
-      /^\s*(?:%\s*)?(?:power|cases|respondents|participants|observations|subjects|people)\b/i.test(
-        s.slice(n.end, n.end + 20),
+      /^\s*(?:%\s*)?(?:power\b|(?:cases|respondents|participants|observations|subjects|people|events)\s+(?:per|for each|for every)\b)/i.test(
+        s.slice(n.end, n.end + 30),
       )
     )
       continue;
     const before = s.slice(0, n.start);
-    if (BLOCKER.test(before.slice(-24)) && !/1\s*[-−–]\s*β\s*=\s*$/.test(before)) continue;
+    // "The KMO was 0." is the first half of a decimal broken after its point ("0. 88") by the splitter
+    if (n.raw === "0" && /^\.\s*$/.test(s.slice(n.end))) continue;
+    const blocked = BLOCKER.test(before.slice(-24)) && !/1\s*[-−–]\s*β\s*=\s*$/.test(before);
     if (/\bp\s*[<=>≤≥]\s*$/i.test(before) || /\bat the\s*$/i.test(before)) continue;
     if (/^\s*[-–]?(?:point|item|year|day|week|month|hour|minute|factor|wave)s?\b/i.test(s.slice(n.end, n.end + 12)))
       continue;
@@ -438,6 +743,9 @@ export function extractStatements(
     }
     const mention = mentions[mi];
     if (n.start - mention.end > 150) continue;
+    // A test-statistic sign blocks the number unless it is the mention's own ("d = 0.41", "first-stage F = 24").
+    if (blocked && !/^\s*(?:\([^)]*\))?\s*(?:[=<>≤≥]|of|was|were)\s*[-−–]?$/.test(s.slice(mention.end, n.start)))
+      continue;
     // Several names joined by "and" / "," with no number between share the value ("CFI and TLI of .95").
     const group: Mention[] = [mention];
     for (let i = mi - 1; i >= 0; i--) {
@@ -455,16 +763,70 @@ export function extractStatements(
     const gap = s.slice(gapStart, n.start);
     const after = s.slice(n.end, n.end + 60);
 
+    // A reported range ("alphas ranged from .78 to .92") reports its two ends as obtained values.
+    const pushRangeEnd = (k: StatisticKey, v: number) => {
+      const prevEnd = prevNum ? s.slice(prevNum.end, n.start) : "";
+      const twoEnded =
+        /^\s*(?:\([^)]*\)\s*)?(?:and|to|[-–])\s*[.\d]/.test(after) ||
+        /^\s*(?:\([^)]*\)\s*)?(?:and|to|[-–])\s*$/.test(prevEnd);
+      if (twoEnded && !n.percent)
+        cands.push({
+          kind: "reported",
+          statistic: k,
+          comparator: "=",
+          value: v,
+          framing: null,
+          procedure: null,
+          at: n.start,
+        });
+    };
     for (const g of group) {
       let key = g.key;
       let value = n.percent ? n.value / 100 : n.value;
+      if (n.count && !COUNT_KEYS.has(key)) continue;
+      // A number word is a value only with a comparator or "of" before it ("above zero", "at least ten").
+      if (
+        n.word &&
+        !/(?:above|below|exceed\w*|than|at least|at most|of|under|over|equals?|to|minimum|maximum|≥|≤|[<>=])\s*$/i.test(
+          gap,
+        )
+      )
+        continue;
+      // an effect size given with its test ("d = 0.21, p = .04") is a result, like the p-value beside it
+      // (and the d assumed in a power analysis is neither a rule nor a result)
+      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d|\bpower\b|\bto detect\b/i.test(s)) continue;
+      // a named statistic of no tracked kind counts only with a rule or a plain "was"/"=" value
+      if (g.generic && !sentenceThreshold && !/(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap)) continue;
+      // "an alpha level of .70": a significance level is never that large, so it is a scale's alpha
+      const alphaWord = /α|alpha/i.test(s.slice(g.start, g.end));
       const isSig =
-        g.significance ||
-        (key === "cronbach_alpha" && /α|alpha/i.test(s.slice(g.start, g.end)) && value > 0 && value <= 0.1);
+        (g.significance && !(alphaWord && value > 0.2)) ||
+        (key === "cronbach_alpha" && alphaWord && value > 0 && value <= 0.1);
       if (isSig) key = "p_value";
+      else if (g.significance && alphaWord) key = "cronbach_alpha";
+      // a p-value named in words counts only as a rule ("a p-value below .05 was considered significant")
+      if (
+        key === "p_value" &&
+        g.significance &&
+        !/level|α|alpha/i.test(s.slice(g.start, g.end)) &&
+        (!pThresholdSentence || value > 0.2)
+      )
+        continue;
+      // values at the bounds of a statistic's scale, explained: "kappa equals 1 for perfect agreement"
+      if ((value === 0 || value === 1 || value === -1) && BOUND_MEANING.test(s) && key !== "q_squared") continue;
       if (n.percent && key !== "p_value" && key !== "statistical_power") continue;
       if (BOUNDED.has(key) && (value < 0 || value > 1)) continue;
-      if (!BOUNDED.has(key) && (value < 0 || value > 1000)) continue;
+      if (key === "minimum_sample_size" ? value < 2 || value > 1e6 : !BOUNDED.has(key) && (value < 0 || value > 1000))
+        continue;
+      if (key === "minimum_sample_size" && !sentenceThreshold) continue;
+      // a sample's own size is not a statistic; only the minimum asked for counts
+      if (
+        key === "minimum_sample_size" &&
+        !/minimum/i.test(s.slice(g.start, g.end)) &&
+        /(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap) &&
+        !CUT_BEFORE.test(gap)
+      )
+        continue;
       if (key === "statistical_power" && value < 0.5) continue;
 
       let comparator = comparatorBefore(gap) ?? comparatorAfter(after);
@@ -479,6 +841,12 @@ export function extractStatements(
         /\bboth\b/i.test(gap);
       const onlyOneNumber = nums.filter((x) => x !== n).every((x) => BLOCKER.test(s.slice(0, x.start).slice(-24)));
 
+      // "falls within the recommended range of 0.05 and 0.08": the ends are a cut-off band
+      const withinRange = RANGE_OF.test(gap) && /^\s*(?:and|to|[-–])\s*[.\d]/.test(after);
+      const rangeEndOfRecommended =
+        !!prevNum &&
+        /^\s*(?:and|to|[-–])\s*$/.test(s.slice(prevNum.end, n.start)) &&
+        RANGE_OF.test(s.slice(Math.max(0, prevNum.start - 60), prevNum.start));
       let kind: "threshold" | "reported";
       const prevSame = lastByMention.get(mention);
       const listGap = prevSame ? s.slice(prevSame.end, n.start) : "";
@@ -490,17 +858,57 @@ export function extractStatements(
         !comparatorBefore(listGap);
       if (
         (/\b(?:ranged?|ranging|were between|was between|varied)\b[^;]*$/i.test(s.slice(g.end, n.start)) &&
-          !CUT_NOUN.test(s.slice(g.end, n.start))) ||
-        /\branged? (?:from|between)\b/i.test(s.slice(mention.end, n.start))
-      )
+          !CUT_NOUN.test(s.slice(g.end, n.start)) &&
+          !withinRange &&
+          !rangeEndOfRecommended) ||
+        (/\branged? (?:from|between)\b/i.test(s.slice(mention.end, n.start)) &&
+          !CUT_NOUN.test(s.slice(mention.end, n.start)))
+      ) {
+        pushRangeEnd(key, value);
         continue;
+      }
       if (continuesList && prevSame) {
         kind = prevSame.kind;
         if (kind === "reported" || !comparator || comparator === "=") comparator = prevSame.comparator;
       } else if (key === "p_value") {
         if (resultSig) continue;
         kind = "threshold";
-      } else if (cutBefore) kind = "threshold";
+      } else if (withinRange || rangeEndOfRecommended) kind = "threshold";
+      else if (
+        key === "statistical_power" &&
+        PLANNING.test(s) &&
+        !/(?:=|\bwas|\bwere)\s*$/i.test(gap) &&
+        !/\b(?:achieved|observed|obtained|post[-\s]?hoc|actual|showed|provided|yielded|gave)\b/i.test(s)
+      )
+        kind = "threshold";
+      else if (cutBefore) kind = "threshold";
+      // "Two image items with loadings of 0.38 and 0.41 were removed": item-level values, neither a
+      // rule nor a result of the scale
+      else if (
+        /^\s*(?:of|=|and|,|,\s*and)\s*$/i.test(gap) &&
+        /^\s*(?:\d+|one|two|three|four|five|six|seven|eight|nine|ten)\s+(?:[\w-]+\s+)?(?:items?|indicators?|variables?|questions?)\b/i.test(
+          s,
+        )
+      )
+        continue;
+      // "The R² values for intention (0.52) and behaviour (0.31)"
+      else if (/[\p{L})]\s*\(\s*$/u.test(before) && /^\s*[),;]/.test(after) && /\bfor\b/i.test(s.slice(g.end, n.start)))
+        kind = "reported";
+      else if (disputed && !/(?:=|\bwas|\bwere)\s*$/i.test(gap) && !OBTAINED.test(s.slice(clauseStart, g.start)))
+        kind = "threshold";
+      // "The alpha of .85 was considered good": one obtained value, interpreted; not a rule
+      else if (
+        /^\s*(?:of|was|were|is|=)\s*$/i.test(gap) &&
+        /\b(?:the|our|its|their)\s+(?:[\w'’-]+\s+){0,2}$/i.test(s.slice(clauseStart, g.start)) &&
+        !/\b(?:recommend\w*|required|minimum|maximum|conventional|accepted|common|traditional|usual|desired|target|acceptable|critical)\b/i.test(
+          s.slice(Math.max(clauseStart, g.start - 40), g.start),
+        ) &&
+        !/s$|values?$/i.test(s.slice(g.start, g.end)) &&
+        !comparatorAfter(after) &&
+        !CUT_NOUN.test(s.slice(n.end, n.end + 40))
+      )
+        kind = "reported";
+      else if (OBTAINED.test(s.slice(clauseStart, g.start)) && !disputed) kind = "reported";
       else if (relationToCut) kind = "reported";
       else if (comparator === "=" && /(?:=|\bwas|\bwere)\s*$/i.test(gap)) kind = "reported";
       else if (/\bwhich (?:was|were)\b/i.test(gap)) kind = "reported";
@@ -528,22 +936,32 @@ export function extractStatements(
         (prevNum &&
           /^\s*(?:and|to|[-–])\s*$/i.test(prevGap) &&
           /\b(?:between|from)\s*$/i.test(s.slice(Math.max(0, prevNum.start - 12), prevNum.start))) ||
-        (prevNum && /^\s*to\s*$/i.test(prevGap));
+        (prevNum && /^\s*(?:to|[-–])\s*$/i.test(prevGap));
       if (
         kind === "reported" &&
         ((rangeBefore && rangeAfter) || isRangeEnd || /\branged?\b/i.test(s.slice(g.end, n.start)))
-      )
+      ) {
+        // only a range said to be one ("ranged between"): "values between .56 and .74 confirmed" is not
+        if (/\b(?:ranged?|ranging)\b/i.test(s.slice(g.end, n.start))) pushRangeEnd(key, value);
         continue;
-      if (kind === "threshold" && rangeBefore && rangeAfter) {
+      }
+      if (kind === "threshold" && withinRange) comparator = ">=";
+      else if (kind === "threshold" && rangeEndOfRecommended) comparator = "<=";
+      else if (kind === "threshold" && rangeBefore && rangeAfter) {
         if (HIGHER_IS_WORSE.has(key)) continue; // lower bound of a "lower is better" band says little
         comparator = ">=";
       } else if (kind === "threshold" && isRangeEnd) {
         if (!/\bbetween\s*$/i.test(s.slice(Math.max(0, prevNum!.start - 12), prevNum!.start))) continue; // "X to Y": lower bound only
+        if (/\b(?:lower (?:limit|bound|end)|minimum|floor)\b/i.test(s)) continue; // the band is a minimum
         const repeated = nums.some((x) => x !== n && x !== prevNum && Math.abs(x.value - n.value) < 1e-9);
         if (!HIGHER_IS_WORSE.has(key) && repeated) continue;
         comparator = "<=";
       }
-      if (comparator === ">" && /\b(?:no|none of the|not one)\s*$/i.test(s.slice(0, g.start))) comparator = "<=";
+      // "None of the VIFs exceeded 2.1" (<= 2.1), "No loading was lower than .55" (>= .55)
+      if (/\b(?:no|none of the|not one|not a single|not any)\s*$/i.test(s.slice(0, g.start))) {
+        if (comparator === ">") comparator = "<=";
+        else if (comparator === "<") comparator = ">=";
+      }
       lastByMention.set(mention, { kind, comparator, end: n.end });
       const dedupeKey = `${kind}:${key}:${comparator}:${value}`;
       if (kind === "threshold" && usedValues.has(dedupeKey)) continue;
@@ -553,8 +971,9 @@ export function extractStatements(
         statistic: key,
         comparator,
         value,
-        framing: kind === "threshold" ? (contextual ? "contextual" : "fixed") : null,
+        framing: kind === "threshold" ? framing : null,
         procedure: null,
+        ...(key === "other" ? { statistic_label: g.label ?? null } : {}),
         at: n.start,
       });
     }

@@ -44,6 +44,7 @@ describe("miner accuracy on the gold set", () => {
       row("value accuracy", t.valueOk / t.matched, 0.97),
       row("framing accuracy", t.framingOk / t.framingN, 0.85),
       row("locator presence accuracy", t.locatorOk / t.locatorN, 0.95),
+      row("name of an 'other' statistic", t.labelOk / Math.max(1, t.labelN), 0),
       row("negatives without statement", t.negativesClean / t.negatives, 0.97),
       row("PDF only: threshold F1", f1(pdfTally, "threshold"), 0.92),
       row("PDF only: reported F1", f1(pdfTally, "reported"), 0.9),

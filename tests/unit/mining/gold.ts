@@ -30,6 +30,9 @@ export type Tally = {
   framingOk: number;
   locatorN: number;
   locatorOk: number;
+  /** statements of statistic "other" whose gold names the statistic, and those named the same */
+  labelN: number;
+  labelOk: number;
   negatives: number;
   negativesClean: number;
   errors: string[];
@@ -47,6 +50,8 @@ export function newTally(): Tally {
     framingOk: 0,
     locatorN: 0,
     locatorOk: 0,
+    labelN: 0,
+    labelOk: 0,
     negatives: 0,
     negativesClean: 0,
     errors: [],
@@ -86,6 +91,18 @@ export function score(t: Tally, excerpt: GoldExcerpt, predicted: Statement[], la
       );
     if (hit.p.value !== null && g.value !== null && Math.abs(hit.p.value - g.value) < 1e-9) t.valueOk++;
     else t.errors.push(`${label} ${excerpt.id} VALUE ${g.statistic} got ${hit.p.value} want ${g.value} | ${text}`);
+    if (g.statistic_label) {
+      t.labelN++;
+      // underscores stand for spaces in the gold sources, so both are read alike
+      const norm = (x: string) =>
+        x
+          .toLowerCase()
+          .replace(/[’]/g, "'")
+          .replace(/[_\s]+/g, " ");
+      if (norm(hit.p.statistic_label ?? "") === norm(g.statistic_label)) t.labelOk++;
+      else
+        t.errors.push(`${label} ${excerpt.id} LABEL got ${hit.p.statistic_label} want ${g.statistic_label} | ${text}`);
+    }
     if (g.kind === "threshold") {
       t.framingN++;
       if (hit.p.framing === g.framing) t.framingOk++;
