@@ -457,7 +457,7 @@ export function extractStatements(
 
     for (const g of group) {
       let key = g.key;
-      let value = n.percent ? n.value / 100 : n.value;
+      const value = n.percent ? n.value / 100 : n.value;
       const isSig =
         g.significance ||
         (key === "cronbach_alpha" && /α|alpha/i.test(s.slice(g.start, g.end)) && value > 0 && value <= 0.1);
