@@ -167,3 +167,60 @@ export async function activeAdminCount(db: DB) {
     .executeTakeFirstOrThrow();
   return Number(r.n);
 }
+
+/** The signed-in person as the database knows them now, with their venues, in one round trip. */
+export async function actorRow(db: DB, id: string) {
+  return db
+    .selectFrom("User")
+    .select((eb) => [
+      "User.id",
+      "User.email",
+      "User.name",
+      "User.role",
+      "User.deactivated_at",
+      eb
+        .selectFrom("editor_venues")
+        .select(sql<string[]>`coalesce(array_agg(venue_id::text), '{}')`.as("ids"))
+        .whereRef("editor_venues.user_id", "=", "User.id")
+        .as("venue_ids"),
+    ])
+    .where("User.id", "=", id)
+    .executeTakeFirst();
+}
+
+/** A person by e-mail, compared case-insensitively (sign-in). */
+export async function userByEmail(db: DB, email: string) {
+  return db
+    .selectFrom("User")
+    .select(["id", "email", "name", "password_hash", "deactivated_at"])
+    .where(sql`lower(email)`, "=", email.toLowerCase())
+    .executeTakeFirst();
+}
+
+/** Remembers a consumed sign-in link so its page can say "already used" rather than "not valid". */
+export async function recordUsedSignInLink(db: DB, tokenHash: string, identifier: string) {
+  await db
+    .insertInto("used_sign_in_links")
+    .values({ token_hash: tokenHash, identifier })
+    .onConflict((oc) => oc.doNothing())
+    .execute();
+}
+
+/** Failed password attempts in the last `windowMinutes`, by e-mail and by client address. */
+export async function failedSignIns(db: DB, email: string, ip: string, windowMinutes: number) {
+  const r = await db
+    .selectFrom("sign_in_attempts")
+    .select([
+      sql<number>`count(*) filter (where key = ${email})`.as("by_email"),
+      sql<number>`count(*) filter (where ip = ${ip})`.as("by_ip"),
+    ])
+    .where("succeeded", "=", false)
+    .where(sql<boolean>`at > now() - make_interval(mins => ${windowMinutes})`)
+    .where((eb) => eb.or([eb("key", "=", email), eb("ip", "=", ip)]))
+    .executeTakeFirstOrThrow();
+  return { byEmail: Number(r.by_email), byIp: Number(r.by_ip) };
+}
+
+export async function recordSignInAttempt(db: DB, email: string, ip: string, succeeded: boolean) {
+  await db.insertInto("sign_in_attempts").values({ key: email, ip, succeeded }).execute();
+}
