@@ -3,6 +3,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { DEMO_ACCOUNTS } from "@/db/seed";
+import { databaseUrl } from "@/db/cluster";
 import type { Role } from "@/db/schema/accounts";
 
 // ECHOLINE_E2E_PORT_BASE moves the browser suite's ports (app = base, SMTP = base - 475, mail page =
@@ -10,7 +11,8 @@ import type { Role } from "@/db/schema/accounts";
 export const E2E_PORT_BASE = Number(process.env.ECHOLINE_E2E_PORT_BASE ?? 3100);
 export const APP_URL = `http://localhost:${E2E_PORT_BASE}`;
 export const MAIL_URL = `http://127.0.0.1:${E2E_PORT_BASE - 474}`;
-export const E2E_DATABASE_URL = "postgres://postgres@127.0.0.1:54321/echoline_e2e";
+// On this checkout's test cluster (ECHOLINE_TEST_PG_PORT), never another checkout's.
+export const E2E_DATABASE_URL = databaseUrl("test", "echoline_e2e");
 
 // Launch flags for Debian's Chromium on this closed network (no background connections).
 const ARGS = [
