@@ -3,7 +3,20 @@ import pg from "pg";
 import type { Database } from "./schema";
 
 export type { Database } from "./schema";
+/**
+ * The one name for a database handle: the pool (`getDb()`) or a transaction (Kysely's Transaction
+ * is a Kysely), so every query module runs inside a caller's transaction too.
+ */
 export type DB = Kysely<Database>;
+
+/**
+ * For functions whose writes must commit together. They do not open a transaction of their own
+ * (so a caller can add its own writes, or a job, to the same one); the caller opens it and passes it.
+ */
+export function requireTransaction(db: DB, fn: string): void {
+  if (!db.isTransaction)
+    throw new Error(`${fn} must run inside a transaction: db.transaction().execute((trx) => ${fn}(trx, ...)).`);
+}
 
 // int8 (counts, sizes) comes back as a JS number: our counts stay far below 2^53.
 pg.types.setTypeParser(20, (v) => Number(v));

@@ -1,7 +1,9 @@
 /**
  * `npm test`: every set-up step the tests need, then every test. On a fresh Debian machine it
- * installs Chromium and poppler-utils (pdftotext) when missing, starts the private test cluster,
- * builds the app, runs vitest (unit, integration, browser), and stops the cluster again.
+ * installs Chromium and poppler-utils (pdftotext) when missing, checks formatting, types and the
+ * layer rules (prettier, tsc, eslint: the first failure stops the run), starts the private test
+ * cluster, builds the app, runs vitest (unit, integration, browser), and stops the cluster again.
+ * ECHOLINE_SKIP_CHECKS=1 skips the three checks while iterating on one suite.
  */
 import { execFileSync, spawn } from "node:child_process";
 import fs from "node:fs";
@@ -25,9 +27,40 @@ function ensureDebianPackages() {
   execFileSync("apt-get", ["install", "-y", "-qq", ...missing], { stdio: "inherit", env });
 }
 
+/** The static checks, cheapest first. Each failure stops the run and says what to run to fix it. */
+const CHECKS: { name: string; cmd: string; args: string[]; fix: string }[] = [
+  {
+    name: "formatting (prettier --check .)",
+    cmd: "node_modules/.bin/prettier",
+    args: ["--check", "--log-level", "warn", "."],
+    fix: "npx prettier --write <the files listed above>",
+  },
+  { name: "types (tsc --noEmit)", cmd: "node_modules/.bin/tsc", args: ["--noEmit"], fix: "fix the type errors above" },
+  {
+    name: "lint and layer rules (eslint .)",
+    cmd: "node_modules/.bin/eslint",
+    args: [".", "--cache", "--cache-location", "node_modules/.cache/eslint/"],
+    fix: "fix the errors above; the layer rules are explained in DEVELOPERS.md",
+  },
+];
+
+function runChecks(): boolean {
+  for (const c of CHECKS) {
+    step(`checking ${c.name}`);
+    try {
+      execFileSync(c.cmd, c.args, { stdio: "inherit" });
+    } catch {
+      console.error(`[test] FAILED: ${c.name}. Nothing else was run. To fix: ${c.fix}.`);
+      return false;
+    }
+  }
+  return true;
+}
+
 let code = 1;
 try {
   ensureDebianPackages();
+  if (process.env.ECHOLINE_SKIP_CHECKS !== "1" && !runChecks()) process.exit(1);
   step("starting the test cluster");
   up("test");
   await prepareTemplate();

@@ -158,7 +158,10 @@ export function createGraphJobs(deps: GraphJobDeps = defaultDeps): JobDefinition
       name: GRAPH_QUEUES.trails,
       preset: RETRY.graph,
       handler: each(GRAPH_QUEUES.trails, practiceSchema, async (d) => {
-        await rebuildPracticeTrails(deps.db(), d.practiceId);
+        await deps
+          .db()
+          .transaction()
+          .execute((trx) => rebuildPracticeTrails(trx, d.practiceId));
         await deps.send(GRAPH_QUEUES.refresh, {}, refreshOnce);
       }),
     },

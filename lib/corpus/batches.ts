@@ -1,5 +1,5 @@
 /** Upload batches: the files a curator sent together, and the metadata file sent with them. */
-import type { Transaction, Updateable } from "kysely";
+import type { Updateable } from "kysely";
 import type { Database, DB } from "@/db";
 import { matchEntry, type MetadataEntry } from "@/lib/metadata";
 import type { IngestMetadata } from "./ingest";
@@ -19,7 +19,7 @@ export async function createBatch(
   return row.id;
 }
 
-async function entriesOf(db: DB | Transaction<Database>, batchId: string): Promise<MetadataEntry[]> {
+async function entriesOf(db: DB, batchId: string): Promise<MetadataEntry[]> {
   const r = await db
     .selectFrom("upload_batches")
     .select("metadata_entries")
@@ -28,7 +28,7 @@ async function entriesOf(db: DB | Transaction<Database>, batchId: string): Promi
   return r?.metadata_entries ?? [];
 }
 
-export async function venueIdByName(db: DB | Transaction<Database>, name: string | null): Promise<string | undefined> {
+export async function venueIdByName(db: DB, name: string | null): Promise<string | undefined> {
   if (!name) return undefined;
   const v = await db
     .selectFrom("venues")
@@ -38,7 +38,7 @@ export async function venueIdByName(db: DB | Transaction<Database>, name: string
   return v?.id;
 }
 
-async function toIngest(db: DB | Transaction<Database>, e: MetadataEntry): Promise<IngestMetadata> {
+async function toIngest(db: DB, e: MetadataEntry): Promise<IngestMetadata> {
   return {
     title: e.title ?? undefined,
     authors: e.authors.length ? e.authors : undefined,
@@ -63,11 +63,7 @@ export async function metadataForFile(
  * After mining: the document's DOI may match an entry of its batch's metadata file. Fills the
  * fields that are still empty, before the document's own metadata is considered.
  */
-export async function applyBatchMetadataByDoi(
-  trx: Transaction<Database>,
-  articleId: string,
-  doi: string | null,
-): Promise<void> {
+export async function applyBatchMetadataByDoi(trx: DB, articleId: string, doi: string | null): Promise<void> {
   if (!doi) return;
   const a = await trx
     .selectFrom("articles")

@@ -1,11 +1,10 @@
-import type { Kysely, Transaction } from "kysely";
-import type { Database } from "@/db";
+import type { DB } from "@/db";
 import type { ArticleStatus } from "@/lib/vocabulary";
 import { MINING_QUEUE } from "./queue";
 
 /** Every status change of an article is also a row of job_events: the article's history. */
 export async function recordEvent(
-  db: Kysely<Database> | Transaction<Database>,
+  db: DB,
   articleId: string,
   state: ArticleStatus | "retry",
   message: string | null,

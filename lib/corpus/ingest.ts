@@ -1,10 +1,10 @@
 /**
  * Getting one file into the corpus: store it by SHA-256, insert its article, and enqueue mining in
- * the same transaction. The same bytes uploaded twice are one article (unique on the hash).
+ * the caller's transaction. The same bytes uploaded twice are one article (unique on the hash).
  */
 import { createHash } from "node:crypto";
-import { sql, type Transaction } from "kysely";
-import type { Database, DB } from "@/db";
+import { sql } from "kysely";
+import { requireTransaction, type DB } from "@/db";
 import type { FileStorage } from "@/lib/storage";
 import { detectKind } from "./detect";
 import { enqueueMining, senderFor } from "./queue";
@@ -45,11 +45,17 @@ export function sha256Hex(data: Uint8Array): string {
   return createHash("sha256").update(data).digest("hex");
 }
 
+/**
+ * Runs inside the caller's transaction (`boss` from `senderFor(db)` on the pool handle), so the
+ * article, its events and its mining job commit together, with whatever else the caller writes.
+ */
 export async function ingestFile(
-  db: DB,
+  trx: DB,
+  boss: Awaited<ReturnType<typeof senderFor>>,
   storage: FileStorage,
   input: IngestInput,
 ): Promise<{ articleId: string; duplicate: boolean }> {
+  requireTransaction(trx, "ingestFile");
   if (input.data.length === 0) throw new IngestError("empty", `${input.filename} is empty (0 bytes).`);
   const detected = await detectKind(input.data);
   if (detected.kind === null)
@@ -61,53 +67,50 @@ export async function ingestFile(
   // The file is written before the rows: a rolled-back transaction leaves at most an unreferenced
   // file, which is harmless because storage is content-addressed and a retry reuses it.
   const key = await storage.put(sha, input.data);
-  const boss = await senderFor(db);
   const m = input.metadata ?? {};
   try {
-    return await db.transaction().execute(async (trx) => {
+    await trx
+      .insertInto("stored_files")
+      .values({ sha256: sha, size_bytes: input.data.length, media_type: detected.mediaType, storage_key: key })
+      .onConflict((oc) => oc.column("sha256").doNothing())
+      .execute();
+    const inserted = await trx
+      .insertInto("articles")
+      .values({
+        file_sha256: sha,
+        original_filename: input.filename.slice(0, 500),
+        source_kind: detected.kind,
+        title: m.title?.trim() || null,
+        authors: JSON.stringify((m.authors ?? []).map((a) => a.trim()).filter(Boolean)),
+        year: m.year ?? null,
+        doi: normaliseDoi(m.doi),
+        venue_id: m.venueId ?? null,
+        licence: m.licence?.trim() || null,
+        uploaded_by: input.uploadedBy,
+        upload_batch_id: input.batchId ?? null,
+        is_demo: input.isDemo ?? false,
+      })
+      .onConflict((oc) => oc.column("file_sha256").doNothing())
+      .returning("id")
+      .executeTakeFirst();
+    if (!inserted) {
+      const existing = await trx
+        .selectFrom("articles")
+        .select("id")
+        .where("file_sha256", "=", sha)
+        .executeTakeFirstOrThrow();
+      return { articleId: existing.id, duplicate: true };
+    }
+    await recordEvent(trx, inserted.id, "uploaded", null);
+    await queueArticle(trx, boss, inserted.id, "upload");
+    if (input.batchId) {
       await trx
-        .insertInto("stored_files")
-        .values({ sha256: sha, size_bytes: input.data.length, media_type: detected.mediaType, storage_key: key })
-        .onConflict((oc) => oc.column("sha256").doNothing())
+        .updateTable("upload_batches")
+        .set((eb) => ({ file_count: eb("file_count", "+", 1) }))
+        .where("id", "=", input.batchId)
         .execute();
-      const inserted = await trx
-        .insertInto("articles")
-        .values({
-          file_sha256: sha,
-          original_filename: input.filename.slice(0, 500),
-          source_kind: detected.kind,
-          title: m.title?.trim() || null,
-          authors: JSON.stringify((m.authors ?? []).map((a) => a.trim()).filter(Boolean)),
-          year: m.year ?? null,
-          doi: normaliseDoi(m.doi),
-          venue_id: m.venueId ?? null,
-          licence: m.licence?.trim() || null,
-          uploaded_by: input.uploadedBy,
-          upload_batch_id: input.batchId ?? null,
-          is_demo: input.isDemo ?? false,
-        })
-        .onConflict((oc) => oc.column("file_sha256").doNothing())
-        .returning("id")
-        .executeTakeFirst();
-      if (!inserted) {
-        const existing = await trx
-          .selectFrom("articles")
-          .select("id")
-          .where("file_sha256", "=", sha)
-          .executeTakeFirstOrThrow();
-        return { articleId: existing.id, duplicate: true };
-      }
-      await recordEvent(trx, inserted.id, "uploaded", null);
-      await queueArticle(trx, boss, inserted.id, "upload");
-      if (input.batchId) {
-        await trx
-          .updateTable("upload_batches")
-          .set((eb) => ({ file_count: eb("file_count", "+", 1) }))
-          .where("id", "=", input.batchId)
-          .execute();
-      }
-      return { articleId: inserted.id, duplicate: false };
-    });
+    }
+    return { articleId: inserted.id, duplicate: false };
   } catch (err) {
     if (
       (err as { code?: string; constraint?: string }).code === "23505" &&
@@ -124,7 +127,7 @@ export async function ingestFile(
 
 /** Marks an article queued and sends its mining job, inside the caller's transaction. */
 export async function queueArticle(
-  trx: Transaction<Database>,
+  trx: DB,
   boss: Awaited<ReturnType<typeof senderFor>>,
   articleId: string,
   reason: "upload" | "remine",

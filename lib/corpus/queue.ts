@@ -2,9 +2,10 @@
  * Sending mining jobs. Jobs are inserted through the caller's Kysely transaction (pg-boss's `db`
  * option), so an article and its job are committed together or not at all.
  */
-import { CompiledQuery, type Kysely, type Transaction } from "kysely";
+import { CompiledQuery } from "kysely";
 import { PgBoss, type Queue } from "pg-boss";
-import type { Database, DB } from "@/db";
+import type { DB } from "@/db";
+// eslint-disable-next-line boundaries/dependencies -- TODO(lead): remove after jobs/screens merge (the job registry moves to lib/)
 import { miningPreset, type RetryPreset } from "@/workers/job-types";
 
 export const MINING_QUEUE = "mine-article";
@@ -14,8 +15,6 @@ export const MINING_QUEUE = "mine-article";
  */
 export const MINING_STOPPED_QUEUE = "mine-article-stopped";
 export type MiningJobData = { articleId: string; reason?: "upload" | "remine" };
-
-type Executor = Kysely<Database> | Transaction<Database>;
 
 /**
  * pg-boss's database adapter over a Kysely handle or transaction.
@@ -29,7 +28,7 @@ type Executor = Kysely<Database> | Transaction<Database>;
  * handle each call holds one connection and rolls back on failure before letting it go; inside a
  * caller's transaction the caller's own rollback does that.
  */
-export function bossDb(db: Executor) {
+export function bossDb(db: DB) {
   const rows = (r: { rows: unknown[] }) => ({ rows: r.rows as Record<string, unknown>[] });
   if (db.isTransaction) {
     return {
@@ -140,10 +139,6 @@ export async function ensureMiningQueue(
  * a second re-mine request while one waits returns null instead of queueing twice. Retry, expiry,
  * heartbeat and dead letter come from the queue (ensureMiningQueue).
  */
-export async function enqueueMining(
-  boss: PgBoss,
-  trx: Transaction<Database>,
-  data: MiningJobData,
-): Promise<string | null> {
+export async function enqueueMining(boss: PgBoss, trx: DB, data: MiningJobData): Promise<string | null> {
   return boss.send(MINING_QUEUE, data, { singletonKey: data.articleId, db: bossDb(trx) });
 }

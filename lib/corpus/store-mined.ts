@@ -4,8 +4,7 @@
  * transaction, so readers see the old rows or the new rows, never a mixture.
  */
 import { createHash } from "node:crypto";
-import type { Transaction } from "kysely";
-import type { Database } from "@/db";
+import type { DB } from "@/db";
 import type { Sourcing } from "@/lib/vocabulary";
 import type { DocumentCitation, Statement, StatementCitation, SuccessLine } from "@/lib/mining/contract";
 
@@ -55,11 +54,7 @@ function sameCitation(a: StatementCitation, b: DocumentCitation): boolean {
 export type StoreCounts = { statements: number; citations: number; references: number };
 
 /** Replaces every mined row of `articleId` with the rows of `line`. Call inside a transaction. */
-export async function replaceMinedRows(
-  trx: Transaction<Database>,
-  articleId: string,
-  line: SuccessLine,
-): Promise<StoreCounts> {
+export async function replaceMinedRows(trx: DB, articleId: string, line: SuccessLine): Promise<StoreCounts> {
   // statement_citations go with their statements (on delete cascade).
   await trx.deleteFrom("statements").where("article_id", "=", articleId).execute();
   await trx.deleteFrom("citations").where("article_id", "=", articleId).execute();

@@ -1,15 +1,16 @@
 import type { DB } from "@/db";
-import { HttpError } from "@/lib/server/errors";
+import { ValidationError } from "@/lib/errors";
 import { toCsv, type Row } from "./csv";
 import { driftView } from "./drift";
 import type { Filters } from "./filters";
 import { practiceOverTime, trailEnds, venueComparison, type Table } from "./queries";
 import { practiceTrailView } from "./trail-view";
 
-const NAMES = ["practice-over-time", "trail-ends", "venues", "drift", "trail-graph"] as const;
-export type DashboardName = (typeof NAMES)[number];
+import { DASHBOARD_NAMES, type DashboardName } from "@/lib/vocabulary";
+
+export { DASHBOARD_NAMES, type DashboardName };
 export const isDashboardName = (s: string | undefined): s is DashboardName =>
-  (NAMES as readonly string[]).includes(s ?? "");
+  (DASHBOARD_NAMES as readonly string[]).includes(s ?? "");
 
 export interface DashboardPayload {
   practice: { id: string; key: string; label: string; statistic: string } | null;
@@ -47,9 +48,7 @@ export function dashboardCsv(data: DashboardPayload, table?: string): { table: s
   const name = table ?? Object.keys(data.tables)[0];
   const t = data.tables[name];
   if (!t)
-    throw new HttpError(
-      400,
-      "invalid",
+    throw new ValidationError(
       `This dashboard has no table "${name}"; it has ${Object.keys(data.tables).join(", ")}.`,
       "table",
     );

@@ -9,6 +9,7 @@ import path from "node:path";
 import { sql } from "kysely";
 import type { DB } from "@/db";
 import { IngestError, ingestFile, sha256Hex } from "@/lib/corpus/ingest";
+import { senderFor } from "@/lib/corpus/queue";
 import { getStorage, type FileStorage } from "@/lib/storage";
 import { DEFAULT_COUNT, DEFAULT_SEED, generateCorpus, type DemoVenue } from "./corpus";
 import { pdfFilename, pdfAuthor, renderArticlePdf } from "./render";
@@ -75,6 +76,7 @@ export async function loadDemoCorpus(
   const dir = opts.cacheDir ?? path.join(process.cwd(), ".data", "demo", `v${DEMO_GENERATOR_VERSION}-seed${seed}`);
   await mkdir(dir, { recursive: true });
   const venueIds = await ensureDemoVenues(db, corpus.venues);
+  const boss = await senderFor(db);
 
   let created = 0;
   let skipped = 0;
@@ -102,20 +104,22 @@ export async function loadDemoCorpus(
       continue;
     }
     try {
-      const r = await ingestFile(db, storage, {
-        data,
-        filename,
-        metadata: {
-          title: a.title,
-          authors: pdfAuthor(a.authors).split("; "),
-          year: a.year,
-          doi: a.doi,
-          venueId: venueIds.get(a.venueKey),
-          licence: a.licence,
-        },
-        uploadedBy: null,
-        isDemo: true,
-      });
+      const r = await db.transaction().execute((trx) =>
+        ingestFile(trx, boss, storage, {
+          data,
+          filename,
+          metadata: {
+            title: a.title,
+            authors: pdfAuthor(a.authors).split("; "),
+            year: a.year,
+            doi: a.doi,
+            venueId: venueIds.get(a.venueKey),
+            licence: a.licence,
+          },
+          uploadedBy: null,
+          isDemo: true,
+        }),
+      );
       if (r.duplicate) skipped++;
       else created++;
     } catch (err) {

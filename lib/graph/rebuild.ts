@@ -1,4 +1,5 @@
 import type { DB } from "@/db";
+// eslint-disable-next-line boundaries/dependencies -- TODO(lead): remove after jobs/screens merge (the job registry moves to lib/)
 import { enqueueGraph, GRAPH_QUEUES, trailsOnce } from "@/workers/graph-jobs";
 
 /** After a merge, split or retyping, any practice's trails may change: queue a rebuild of each. */

@@ -3,9 +3,8 @@
  * miner reports it). It only fills fields that are still empty: a curator's correction or an
  * uploaded metadata file always wins over what the file says about itself.
  */
-import type { Transaction } from "kysely";
 import { z } from "zod";
-import type { Database } from "@/db";
+import type { DB } from "@/db";
 import { normaliseDoi } from "@/lib/corpus/doi";
 
 const DocumentMeta = z
@@ -29,7 +28,7 @@ type Current = {
   venue_id: string | null;
 };
 
-export async function documentMetaUpdate(trx: Transaction<Database>, current: Current, raw: unknown) {
+export async function documentMetaUpdate(trx: DB, current: Current, raw: unknown) {
   const parsed = DocumentMeta.safeParse(raw ?? {});
   const meta = parsed.success ? parsed.data : {};
   const out: {

@@ -782,7 +782,7 @@ export function extractStatements(
     };
     for (const g of group) {
       let key = g.key;
-      let value = n.percent ? n.value / 100 : n.value;
+      const value = n.percent ? n.value / 100 : n.value;
       if (n.count && !COUNT_KEYS.has(key)) continue;
       // A number word is a value only with a comparator or "of" before it ("above zero", "at least ten").
       if (

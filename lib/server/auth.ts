@@ -11,8 +11,8 @@ import Nodemailer from "next-auth/providers/nodemailer";
 import { KyselyAdapter } from "@auth/kysely-adapter";
 import type { Adapter } from "next-auth/adapters";
 import { createHash } from "node:crypto";
-import { sql } from "kysely";
 import { getDb } from "@/db";
+import { recordUsedSignInLink, userByEmail } from "@/db/queries/accounts";
 import { verifyPassword, DUMMY_HASH } from "./passwords";
 import { checkRateLimit, recordAttempt } from "./rate-limit";
 import { mailTransport, MAIL_FROM, appUrl } from "./mail";
@@ -35,13 +35,7 @@ function adapter(): Adapter {
     ...base,
     async useVerificationToken(params) {
       const used = await base.useVerificationToken!(params);
-      if (used) {
-        await db
-          .insertInto("used_sign_in_links")
-          .values({ token_hash: params.token, identifier: params.identifier })
-          .onConflict((oc) => oc.doNothing())
-          .execute();
-      }
+      if (used) await recordUsedSignInLink(db, params.token, params.identifier);
       return used;
     },
   };
@@ -73,13 +67,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
       maxAge: 24 * 60 * 60,
       async sendVerificationRequest({ identifier, url }) {
         // Same answer for unknown or deactivated addresses; only invited, active people get a link.
-        const user = await getDb()
-          .selectFrom("User")
-          .select(["id"])
-          .where(sql`lower(email)`, "=", identifier.toLowerCase())
-          .where("deactivated_at", "is", null)
-          .executeTakeFirst();
-        if (!user) return;
+        const user = await userByEmail(getDb(), identifier);
+        if (!user || user.deactivated_at) return;
         // The mail links to our own page, which tells an expired or used link from a good one
         // before handing over to next-auth's callback.
         const u = new URL(url);
@@ -97,11 +86,7 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
         const ip = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? "local";
         if (!email || !password || password.length > 200) return null;
         if (!(await checkRateLimit(email, ip))) throw new RateLimited();
-        const user = await getDb()
-          .selectFrom("User")
-          .select(["id", "email", "name", "password_hash", "deactivated_at"])
-          .where(sql`lower(email)`, "=", email)
-          .executeTakeFirst();
+        const user = await userByEmail(getDb(), email);
         // Compare against a dummy hash for unknown e-mails so both take the same time.
         const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);
         const good = !!user && !!user.password_hash && ok && !user.deactivated_at;
@@ -114,11 +99,7 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
   callbacks: {
     async signIn({ user }) {
       if (!user?.email) return false;
-      const row = await getDb()
-        .selectFrom("User")
-        .select(["deactivated_at"])
-        .where(sql`lower(email)`, "=", user.email.toLowerCase())
-        .executeTakeFirst();
+      const row = await userByEmail(getDb(), user.email);
       return !!row && !row.deactivated_at;
     },
     async jwt({ token, user }) {

@@ -1,4 +1,10 @@
-/** The one error shape every route handler returns: `{ error: { code, message, field? } }`. */
+import { NotFoundError } from "@/lib/errors";
+
+/**
+ * The one error shape every route handler returns: `{ error: { code, message, field? } }`.
+ * HttpError is for what only the web layer knows (401, 413, 415, a refused body); lib/ throws the
+ * domain errors of lib/errors.ts instead, which `errorResponse` maps to the same shape.
+ */
 export class HttpError extends Error {
   constructor(
     public status: number,
@@ -12,7 +18,7 @@ export class HttpError extends Error {
 
 export const unauthenticated = () => new HttpError(401, "unauthenticated", "Sign in to continue.");
 export const forbidden = () => new HttpError(403, "forbidden", "Your role does not allow this.");
-export const notFound = (what = "That item") => new HttpError(404, "not_found", `${what} was not found.`);
+export const notFound = (what = "That item") => new NotFoundError(what);
 
 export function errorBody(code: string, message: string, field?: string) {
   return { error: field ? { code, message, field } : { code, message } };

@@ -1,46 +1,65 @@
 /**
  * The one helper every route handler goes through: authenticate, check the permission, parse the
- * body and query with zod (keeping the schema's types), and turn every failure into the one error
- * shape. Nothing from a stack trace reaches the browser.
+ * route params, body and query with zod (keeping the schemas' types), and turn every failure into
+ * the one error shape. Nothing from a stack trace reaches the browser.
+ *
+ * Params that do not parse (a malformed id, an unknown dashboard name) answer 404, never 400: an
+ * address that cannot name anything names nothing, the same answer as a well-formed id of a row
+ * that does not exist.
  */
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { getActor } from "./session";
 import { can, type Actor, type Permission } from "@/lib/auth/permissions";
+import { DomainError, NotFoundError } from "@/lib/errors";
 import { HttpError, errorBody, isDatabaseDown, unauthenticated, forbidden } from "./errors";
 
 export const DEFAULT_BODY_LIMIT = 256 * 1024;
 
-type Ctx<B, Q> = {
+type Ctx<B, Q, P> = {
   actor: Actor;
   body: B;
   query: Q;
-  params: Record<string, string>;
+  params: P;
   req: NextRequest;
 };
 
-type Options<B extends z.ZodType | undefined, Q extends z.ZodType | undefined> = {
+type Options<B extends z.ZodType | undefined, Q extends z.ZodType | undefined, P extends z.ZodType | undefined> = {
   permission: Permission;
   body?: B;
   query?: Q;
+  /** The dynamic segments of the path, e.g. `z.object({ id: z.uuid() })`; a mismatch answers 404. */
+  params?: P;
+  /** What the 404 for params that do not parse calls the thing ("That article"). */
+  notFound?: string;
   maxBytes?: number;
 };
 
 type Infer<S> = S extends z.ZodType ? z.infer<S> : undefined;
 
-export function route<B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined>(
-  opts: Options<B, Q>,
-  fn: (ctx: Ctx<Infer<B>, Infer<Q>>) => Promise<Response | unknown>,
-) {
-  return async (req: NextRequest, context: { params: Promise<Record<string, string>> }) => {
+/** The params schema most handlers with one id need. */
+export const idParams = z.object({ id: z.uuid() });
+
+export function route<
+  B extends z.ZodType | undefined = undefined,
+  Q extends z.ZodType | undefined = undefined,
+  P extends z.ZodType | undefined = undefined,
+>(opts: Options<B, Q, P>, fn: (ctx: Ctx<Infer<B>, Infer<Q>, Infer<P>>) => Promise<Response | unknown>) {
+  return async (req: NextRequest, context: { params: Promise<Record<string, string | string[]>> }) => {
     try {
       const actor = await getActor();
       if (!actor) throw unauthenticated();
       if (!can(actor, opts.permission)) throw forbidden();
-      const params = (await context?.params) ?? {};
+      const params = opts.params ? parseParams(opts.params, (await context?.params) ?? {}, opts.notFound) : undefined;
       const query = opts.query ? parse(opts.query, Object.fromEntries(req.nextUrl.searchParams)) : undefined;
       const body = opts.body ? parse(opts.body, await readJson(req, opts.maxBytes ?? DEFAULT_BODY_LIMIT)) : undefined;
-      const out = await fn({ actor, body: body as Infer<B>, query: query as Infer<Q>, params, req });
+      const out = await fn({
+        actor,
+        body: body as Infer<B>,
+        query: query as Infer<Q>,
+        params: params as Infer<P>,
+        req,
+      });
       if (out instanceof Response) return out;
       return NextResponse.json(out ?? { ok: true });
     } catch (err) {
@@ -49,9 +68,23 @@ export function route<B extends z.ZodType | undefined = undefined, Q extends z.Z
   };
 }
 
+/** The status each kind of domain error (lib/errors.ts) answers with. */
+const DOMAIN_STATUS: Record<DomainError["kind"], number> = {
+  invalid: 400,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  gone: 410,
+};
+
 export function errorResponse(err: unknown): Response {
   if (err instanceof HttpError) {
     return NextResponse.json(errorBody(err.code, err.message, err.field), { status: err.status });
+  }
+  if (err instanceof DomainError) {
+    return NextResponse.json(errorBody(err.code ?? err.kind, err.message, err.field), {
+      status: DOMAIN_STATUS[err.kind],
+    });
   }
   // next/navigation's redirect/forbidden throw control-flow errors that Next must see.
   if (
@@ -71,6 +104,12 @@ export function errorResponse(err: unknown): Response {
   return NextResponse.json(errorBody("internal", "Something went wrong on our side. The error was logged."), {
     status: 500,
   });
+}
+
+function parseParams<S extends z.ZodType>(schema: S, input: unknown, what?: string): z.infer<S> {
+  const r = schema.safeParse(input);
+  if (!r.success) throw new NotFoundError(what);
+  return r.data;
 }
 
 function parse<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {

@@ -2,8 +2,8 @@ import { cache } from "react";
 import { redirect, forbidden as nextForbidden } from "next/navigation";
 import { headers } from "next/headers";
 import { sessionUserId } from "./session-token";
-import { sql } from "kysely";
 import { getDb } from "@/db";
+import { actorRow } from "@/db/queries/accounts";
 import { can, type Actor, type Permission } from "@/lib/auth/permissions";
 
 /**
@@ -15,22 +15,7 @@ export const getActor = cache(async (): Promise<Actor | null> => {
   const id = await sessionUserId(h.get("cookie"), h.get("x-forwarded-proto"));
   if (!id) return null;
   // One round trip: the person and their venues together (this runs on every request).
-  const user = await getDb()
-    .selectFrom("User")
-    .select((eb) => [
-      "User.id",
-      "User.email",
-      "User.name",
-      "User.role",
-      "User.deactivated_at",
-      eb
-        .selectFrom("editor_venues")
-        .select(sql<string[]>`coalesce(array_agg(venue_id::text), '{}')`.as("ids"))
-        .whereRef("editor_venues.user_id", "=", "User.id")
-        .as("venue_ids"),
-    ])
-    .where("User.id", "=", id)
-    .executeTakeFirst();
+  const user = await actorRow(getDb(), id);
   if (!user || user.deactivated_at) return null;
   return { id: user.id, email: user.email, name: user.name, role: user.role, venueIds: user.venue_ids ?? [] };
 });

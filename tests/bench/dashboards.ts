@@ -360,7 +360,7 @@ async function main() {
   if (!SKIP_TRAILS || generated) {
     const s = t0();
     let trails = 0;
-    for (const p of practices) trails += await rebuildPracticeTrails(db, p.id);
+    for (const p of practices) trails += await db.transaction().execute((trx) => rebuildPracticeTrails(trx, p.id));
     const secs = ms(s) / 1000;
     trailLine = `Trail building, whole corpus (${trails} trails, ${practices.length} practices): ${secs.toFixed(1)} s (load ${load()}).`;
     log(trailLine);

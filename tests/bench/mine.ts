@@ -14,7 +14,7 @@ import { up } from "@/db/cluster";
 import { prepareTemplate } from "@/tests/setup/db-global";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { folderStorage } from "@/lib/storage";
-import { ingestFile } from "@/lib/corpus/ingest";
+import { ingest } from "../helpers/ingest";
 import { senderFor } from "@/lib/corpus/queue";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { createMiner } from "@/lib/mining";
@@ -145,7 +145,7 @@ async function pipeline(files: string[], pages: number, workers: number) {
   const idleMb = Math.max(...ws.map((w) => w.rssKb())) / 1024;
   const start = performance.now();
   for (const f of files)
-    await ingestFile(t.db, storage, {
+    await ingest(t.db, storage, {
       data: new Uint8Array(fs.readFileSync(f)),
       filename: path.basename(f),
       uploadedBy: null,

@@ -5,6 +5,7 @@ import { sessionCookie } from "../helpers/http";
 import { stackEnv, waitForHttp } from "@/workers/stack";
 import { DATA_DIR } from "@/db/cluster";
 import path from "node:path";
+import fs from "node:fs";
 
 let admin: string;
 beforeAll(async () => {
@@ -62,6 +63,55 @@ describe("bad input gets a clear JSON error that names the field", () => {
     } as RequestInit);
     expect(r2.status).toBe(413);
   });
+});
+
+// Every page and route handler with a dynamic segment (found on disk), reached with ids that cannot
+// name anything: each answers 404, the same as a well-formed id of a row that does not exist.
+function dynamicFiles(dir: string): string[] {
+  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    const p = path.join(dir, e.name);
+    if (e.isDirectory()) return dynamicFiles(p);
+    return /^(page\.tsx|route\.ts)$/.test(e.name) && /\[[^.\]][^\]]*\]/.test(p) ? [p] : [];
+  });
+}
+const urlOf = (file: string, id: string) =>
+  "/" +
+  path
+    .relative("app", file)
+    .replace(/\/(page\.tsx|route\.ts)$/, "")
+    .split(path.sep)
+    .filter((s) => !/^\(.*\)$/.test(s))
+    .map((s) => (/^\[.*\]$/.test(s) ? id : s))
+    .join("/");
+
+// One retry on a transport error only: under load undici can reuse a keep-alive socket the server
+// has just closed (ECONNRESET). A server that really failed fails the second try too.
+const fetchOnceMore = (url: string, init: RequestInit) => fetch(url, init).catch(() => fetch(url, init));
+
+describe("a malformed id answers 404 on every page and route that takes one", () => {
+  // The invitation page takes any token and explains a bad one itself (tested in admin-people).
+  const files = dynamicFiles("app").filter((f) => !f.includes("[token]"));
+  it("finds them", () => expect(files.length).toBeGreaterThanOrEqual(15));
+  for (const file of files) {
+    it(file, async () => {
+      const url = urlOf(file, "not-an-id");
+      if (file.endsWith("page.tsx")) {
+        const r = await fetchOnceMore(`${APP_URL}${url}`, { headers: { cookie: admin }, redirect: "manual" });
+        expect({ url, status: r.status }).toEqual({ url, status: 404 });
+        return;
+      }
+      for (const method of ["GET", "POST", "PUT", "PATCH"]) {
+        const r = await fetchOnceMore(`${APP_URL}${url}`, {
+          method,
+          headers: { cookie: admin, "content-type": "application/json" },
+          ...(method === "GET" ? {} : { body: "{}" }),
+        });
+        if (r.status === 405) continue; // the route has no such method
+        expect({ url, method, status: r.status }).toEqual({ url, method, status: 404 });
+        expect(((await r.json()) as { error: { code: string } }).error.code).toBe("not_found");
+      }
+    });
+  }
 });
 
 describe("the database being down", () => {

@@ -21,7 +21,7 @@ beforeAll(async () => {
   ids = await loadFixture(db);
   const deps: GraphJobDeps = { db: () => db, send: async () => undefined };
   for (const k of ["M", "A1", "A2", "A3", "A4"]) await handleResolve(deps, { articleId: ids.articles[k] });
-  await rebuildAllTrails(db);
+  await db.transaction().execute((trx) => rebuildAllTrails(trx));
   await refreshSummaries(db);
   // The e2e database may also hold other suites' articles (the demo corpus): keep to the fixture's venues.
   only = `venues=${ids.venues.methods},${ids.venues.applied}`;

@@ -15,7 +15,7 @@ import { sql } from "kysely";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { databaseUrl, findBinDir } from "@/db/cluster";
 import { folderStorage } from "@/lib/storage";
-import { ingestFile } from "@/lib/corpus/ingest";
+import { ingest } from "../helpers/ingest";
 import { senderFor } from "@/lib/corpus/queue";
 import { goodPdf } from "@/tests/integration/mining/fixtures";
 import type { DB } from "@/db";
@@ -96,13 +96,13 @@ async function putRows(db: DB) {
     .values({ email: "backup-curator@echoline.local", name: "Backup Curator (invented)", role: "curator" })
     .returning("id")
     .executeTakeFirstOrThrow();
-  const pdf = await ingestFile(db, storage, {
+  const pdf = await ingest(db, storage, {
     data: await goodPdf(),
     filename: "invented-study.pdf",
     metadata: { title: "An invented study of scale reliability", year: 2011 },
     uploadedBy: user.id,
   });
-  const txt = await ingestFile(db, storage, {
+  const txt = await ingest(db, storage, {
     data: new TextEncoder().encode("Methods\nReliability above .70 is acceptable (Invented & Author, 1999, p. 12).\n"),
     filename: "invented-note.txt",
     uploadedBy: user.id,

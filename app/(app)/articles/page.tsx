@@ -3,6 +3,7 @@ import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { ArticleFilters, ARTICLE_STATUSES, listArticles } from "@/lib/corpus/articles";
+import { listVenues } from "@/db/queries/venues";
 import { EmptyState } from "@/components/ui/empty-state";
 import { STATUS_LABEL } from "@/components/upload/status";
 
@@ -19,10 +20,7 @@ export default async function ArticlesPage({
   const parsed = ArticleFilters.safeParse(raw);
   const filters = parsed.success ? parsed.data : ArticleFilters.parse({});
   const db = getDb();
-  const [{ articles, hasMore, page }, venues] = await Promise.all([
-    listArticles(db, filters),
-    db.selectFrom("venues").select(["id", "name"]).orderBy("name").execute(),
-  ]);
+  const [{ articles, hasMore, page }, venues] = await Promise.all([listArticles(db, filters), listVenues(db)]);
   const filtered = !!(filters.status || filters.venue || filters.year || filters.q);
   const qs = (p: number) => new URLSearchParams({ ...(raw as Record<string, string>), page: String(p) }).toString();
   return (

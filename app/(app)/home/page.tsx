@@ -1,8 +1,9 @@
 import Link from "next/link";
-import { sql } from "kysely";
 import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
+import { corpusCounts } from "@/db/queries/articles";
+import { listVenues } from "@/db/queries/venues";
 import { EmptyState } from "@/components/ui/empty-state";
 
 export const metadata = { title: "Home" };
@@ -10,22 +11,7 @@ export const metadata = { title: "Home" };
 export default async function HomePage() {
   const actor = await requirePage("corpus:read");
   const db = getDb();
-  const counts = await db
-    .selectFrom("articles")
-    .select([
-      sql<number>`count(*)`.as("articles"),
-      sql<number>`count(*) filter (where status = 'done')`.as("done"),
-      sql<number>`count(*) filter (where status = 'failed')`.as("failed"),
-      sql<number>`count(*) filter (where status not in ('done','failed'))`.as("pending"),
-    ])
-    .executeTakeFirstOrThrow();
-  const statements = await db
-    .selectFrom("statements")
-    .select(sql<number>`count(*)`.as("n"))
-    .executeTakeFirstOrThrow();
-  const venues = actor.venueIds.length
-    ? await db.selectFrom("venues").select(["id", "name"]).where("id", "in", actor.venueIds).execute()
-    : [];
+  const [counts, venues] = await Promise.all([corpusCounts(db), listVenues(db, { ids: actor.venueIds })]);
 
   return (
     <div className="grid gap-8">
@@ -38,7 +24,7 @@ export default async function HomePage() {
           ["Articles", counts.articles],
           ["Mined", counts.done],
           ["Waiting or mining", counts.pending],
-          ["Statements", statements.n],
+          ["Statements", counts.statements],
         ].map(([label, n]) => (
           <div key={String(label)} className="rounded-lg border border-rule bg-paper-2 p-4">
             <dt className="text-sm text-ink-2">{label}</dt>

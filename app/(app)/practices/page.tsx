@@ -1,20 +1,14 @@
 import Link from "next/link";
-import { sql } from "kysely";
 import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
+import { practicesWithCounts } from "@/db/queries/practices";
 import { PracticeForm } from "@/components/practices/practice-form";
 import { EmptyState } from "@/components/ui/empty-state";
 
 export default async function PracticesPage() {
   const actor = await requirePage("corpus:read");
-  const rows = await getDb()
-    .selectFrom("practices as p")
-    .leftJoin("statement_practices as sp", "sp.practice_id", "p.id")
-    .select(["p.id", "p.label", "p.is_seeded", sql<number>`count(sp.statement_id)::int`.as("statements")])
-    .groupBy("p.id")
-    .orderBy("p.label")
-    .execute();
+  const rows = await practicesWithCounts(getDb());
   return (
     <div className="space-y-4">
       <h1 className="font-serif text-3xl font-semibold">Practices</h1>

@@ -1,7 +1,7 @@
 import { Suspense } from "react";
 import { requirePage } from "@/lib/server/session";
 import { getDb } from "@/db";
-import { venueOptions } from "@/lib/dashboards/venues";
+import { listVenues } from "@/db/queries/venues";
 import { DashboardTabs } from "@/components/dashboards/dashboard-tabs";
 import { FiltersBar } from "@/components/dashboards/filters-bar";
 import { DashboardView } from "@/components/dashboards/dashboard-view";
@@ -9,7 +9,7 @@ import { DashboardView } from "@/components/dashboards/dashboard-view";
 export default async function PracticeTrailsPage({ searchParams }: { searchParams: Promise<Record<string, string>> }) {
   await requirePage("corpus:read");
   const search = new URLSearchParams(await searchParams).toString();
-  const venues = await venueOptions(getDb());
+  const venues = await listVenues(getDb());
   return (
     <div className="space-y-4">
       <h1 className="font-serif text-3xl font-semibold">Trail graph of a practice</h1>

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db";
+import { signInLinkState } from "@/db/queries/accounts";
 import { hashLinkToken } from "@/lib/server/auth";
 import { appUrl } from "@/lib/server/mail";
 
@@ -20,19 +21,7 @@ export default async function SignInLinkPage({
   const email = sp.email ?? "";
   let state: "ok" | "expired" | "used" | "invalid" = "invalid";
   if (token && email) {
-    const hash = hashLinkToken(token);
-    const db = getDb();
-    const row = await db
-      .selectFrom("VerificationToken")
-      .select(["expires"])
-      .where("token", "=", hash)
-      .where("identifier", "=", email)
-      .executeTakeFirst();
-    if (row) state = new Date(row.expires) > new Date() ? "ok" : "expired";
-    else if (
-      await db.selectFrom("used_sign_in_links").select("token_hash").where("token_hash", "=", hash).executeTakeFirst()
-    )
-      state = "used";
+    state = await signInLinkState(getDb(), hashLinkToken(token), email);
   }
   if (state === "ok") {
     const q = new URLSearchParams({ token, email, callbackUrl: sp.callbackUrl ?? `${appUrl()}/home` });

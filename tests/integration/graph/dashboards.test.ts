@@ -52,7 +52,7 @@ beforeAll(async () => {
     statedValue: 0.8,
     checkedBy: null,
   });
-  await rebuildAllTrails(db);
+  await db.transaction().execute((trx) => rebuildAllTrails(trx));
   await refreshSummaries(db);
 });
 afterAll(async () => t?.drop());
@@ -310,17 +310,19 @@ describe("curator merge and split", () => {
       .where("kind", "=", "book")
       .orderBy("id")
       .execute();
-    await splitWork(db, bookRefs[0].work_id!, [bookRefs[0].id]);
+    await db.transaction().execute((trx) => splitWork(trx, bookRefs[0].work_id!, [bookRefs[0].id]));
     const after = await db
       .selectFrom("references")
       .select("work_id")
       .where("id", "=", bookRefs[0].id)
       .executeTakeFirstOrThrow();
     expect(after.work_id).not.toBe(bookRefs[1].work_id);
-    await mergeWorks(db, after.work_id!, bookRefs[1].work_id!);
+    await db.transaction().execute((trx) => mergeWorks(trx, after.work_id!, bookRefs[1].work_id!));
     const back = await db.selectFrom("references").select("work_id").where("kind", "=", "book").execute();
     expect(new Set(back.map((r) => r.work_id)).size).toBe(1);
-    await expect(mergeWorks(db, a.id, a.id)).rejects.toThrow(/different/);
+    await expect(db.transaction().execute((trx) => mergeWorks(trx, a.id, a.id))).rejects.toThrow(/different/);
+    // Outside a transaction it refuses to run at all: its writes must commit together.
+    await expect(mergeWorks(db, a.id, a.id)).rejects.toThrow(/inside a transaction/);
   });
   it("a reference a curator split off a corpus article stays split when resolution runs again", async () => {
     // A2's reference "Brennemann & Adeyemi (2018)" resolves to A1 (fixture). Without the curator's
@@ -337,7 +339,7 @@ describe("curator merge and split", () => {
       .where("title", "=", "Brand loyalty in invented coastal towns")
       .executeTakeFirstOrThrow();
     expect(ref.work_id).toBe(a1Work.id);
-    const split = await splitWork(db, a1Work.id, [ref.id]);
+    const split = await db.transaction().execute((trx) => splitWork(trx, a1Work.id, [ref.id]));
     const deps: GraphJobDeps = { db: () => db, send: async () => {} };
     await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
     const after = await db
@@ -351,7 +353,7 @@ describe("curator merge and split", () => {
       await db.selectFrom("works").select(["first_author", "year"]).where("id", "=", split).executeTakeFirstOrThrow(),
     ).toEqual({ first_author: "brennemann", year: "2018" });
     // Merging it back puts the reference on A1 again, still as the curator's placement.
-    await mergeWorks(db, split, a1Work.id);
+    await db.transaction().execute((trx) => mergeWorks(trx, split, a1Work.id));
     await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
     expect(
       await db

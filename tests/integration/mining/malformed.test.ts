@@ -3,7 +3,8 @@
  * At least 200 generated malformed files go through the real worker code and the real miner.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ingestFile, IngestError } from "@/lib/corpus/ingest";
+import { IngestError } from "@/lib/corpus/ingest";
+import { ingest } from "../../helpers/ingest";
 import { startHarness, waitForArticles, enqueueRaw, rowCounts, type Harness } from "./harness";
 import { goodPdf, encryptedPdf, imageOnlyPdf, hugePageCountPdf, flipStreams, rng } from "./fixtures";
 
@@ -73,13 +74,13 @@ describe("malformed files through the real worker", () => {
       if (c.raw) {
         // The door refuses them first (content decides the type, not the name).
         await expect(
-          ingestFile(h.db, h.storage, { data: c.data, filename: c.name, uploadedBy: null }),
+          ingest(h.db, h.storage, { data: c.data, filename: c.name, uploadedBy: null }),
         ).rejects.toBeInstanceOf(IngestError);
         const id = await enqueueRaw(h, c.data, c.name);
         ids.push(id);
         names.set(id, c.name);
       } else {
-        const { articleId, duplicate } = await ingestFile(h.db, h.storage, {
+        const { articleId, duplicate } = await ingest(h.db, h.storage, {
           data: c.data,
           filename: c.name,
           uploadedBy: null,
@@ -120,7 +121,7 @@ describe("malformed files through the real worker", () => {
     expect(events.map((e) => e.state)).toEqual(["uploaded", "queued", "reading", "failed"]);
 
     // Still alive: a good PDF after all that is mined.
-    const { articleId } = await ingestFile(h.db, h.storage, {
+    const { articleId } = await ingest(h.db, h.storage, {
       data: await goodPdf(),
       filename: "good.pdf",
       uploadedBy: null,

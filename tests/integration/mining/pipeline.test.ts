@@ -3,7 +3,7 @@
  * article. The real worker code and miner against a suite-owned test database.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ingestFile } from "@/lib/corpus/ingest";
+import { ingest } from "../../helpers/ingest";
 import { senderFor } from "@/lib/corpus/queue";
 import { queueArticle } from "@/lib/corpus/ingest";
 import { sourcingOf, fingerprints } from "@/lib/corpus/store-mined";
@@ -70,8 +70,8 @@ describe("sourcing and fingerprints", () => {
 describe("mining pipeline", () => {
   it("stores the same file once and reports the duplicate", async () => {
     const data = await goodPdf();
-    const first = await ingestFile(h.db, h.storage, { data, filename: "a.pdf", uploadedBy: null });
-    const second = await ingestFile(h.db, h.storage, { data, filename: "copy-of-a.pdf", uploadedBy: null });
+    const first = await ingest(h.db, h.storage, { data, filename: "a.pdf", uploadedBy: null });
+    const second = await ingest(h.db, h.storage, { data, filename: "copy-of-a.pdf", uploadedBy: null });
     expect(second).toEqual({ articleId: first.articleId, duplicate: true });
     const n = await h.db
       .selectFrom("articles")
@@ -96,7 +96,7 @@ describe("mining pipeline", () => {
 
   it("stores all of an article's rows or none: a failure before commit leaves nothing", async () => {
     failNext = true;
-    const { articleId } = await ingestFile(h.db, h.storage, {
+    const { articleId } = await ingest(h.db, h.storage, {
       data: text(ARTICLE + "\nOne."),
       filename: "atomic.txt",
       uploadedBy: null,
@@ -127,7 +127,7 @@ describe("mining pipeline", () => {
   it("while the failing transaction is open, no partial rows are visible", async () => {
     let seenInside = -1;
     let seenOutside = -1;
-    const { articleId } = await ingestFile(h.db, h.storage, {
+    const { articleId } = await ingest(h.db, h.storage, {
       data: text(ARTICLE + "\nTwo."),
       filename: "visible.txt",
       uploadedBy: null,
@@ -159,7 +159,7 @@ describe("mining pipeline", () => {
   });
 
   it("re-mining replaces the rows and keeps the curator's reviews on the same statements", async () => {
-    const { articleId } = await ingestFile(h.db, h.storage, {
+    const { articleId } = await ingest(h.db, h.storage, {
       data: text(ARTICLE),
       filename: "remine.txt",
       uploadedBy: null,

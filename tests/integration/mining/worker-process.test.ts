@@ -11,7 +11,7 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { folderStorage } from "@/lib/storage";
-import { ingestFile } from "@/lib/corpus/ingest";
+import { ingest } from "../../helpers/ingest";
 import { senderFor } from "@/lib/corpus/queue";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { TEST_HANG_FILENAME } from "@/lib/mining/isolated";
@@ -112,7 +112,7 @@ describe("the worker process", () => {
     const data = await pdfOf([
       ["Methods", "Reliability above .70 was treated as acceptable (Quandt & Maréchal, 2004, p. 31)."],
     ]);
-    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), {
+    const { articleId } = await ingest(t.db, folderStorage(filesDir), {
       data,
       filename: "crash.pdf",
       uploadedBy: null,
@@ -169,7 +169,7 @@ describe("the worker process", () => {
       }),
     };
     const first = await startWorker({ ...env, ECHOLINE_TEST_WORKER_HANG_AFTER_READING: "1" });
-    const { articleId } = await ingestFile(t.db, folderStorage(filesDir), {
+    const { articleId } = await ingest(t.db, folderStorage(filesDir), {
       data: await pdfOf([["Heartbeat fixture, invented."]]),
       filename: "heartbeat.pdf",
       uploadedBy: null,
@@ -197,12 +197,12 @@ describe("the worker process", () => {
     const w = await startWorker({ ECHOLINE_MINER_HARD_TIMEOUT_SECONDS: "4" });
     const storage = folderStorage(filesDir);
     // The isolated miner's thread loops forever on this file name (ECHOLINE_TEST_HOOKS=1).
-    const hung = await ingestFile(t.db, storage, {
+    const hung = await ingest(t.db, storage, {
       data: await pdfOf([["Hang fixture one, invented."]]),
       filename: TEST_HANG_FILENAME,
       uploadedBy: null,
     });
-    const next = await ingestFile(t.db, storage, {
+    const next = await ingest(t.db, storage, {
       data: await pdfOf([
         [
           "Method",
@@ -222,7 +222,7 @@ describe("the worker process", () => {
     expect(w.child.exitCode).toBeNull();
 
     // SIGTERM while a document is in progress: the worker waits for its outcome, then exits 0.
-    const third = await ingestFile(t.db, storage, {
+    const third = await ingest(t.db, storage, {
       data: await pdfOf([["Hang fixture two, invented."]]),
       filename: TEST_HANG_FILENAME,
       uploadedBy: null,

@@ -26,8 +26,13 @@ function measure(set: Pair[], threshold: number) {
   for (const p of set) {
     const hit = resolveReference(p.a, [p.b], threshold) !== null;
     if (hit && p.same) tp++;
-    else if (hit) (fp++, errors.push(`FP ${p.id} ${p.variation}`));
-    else if (p.same) (fn++, errors.push(`FN ${p.id} ${p.variation}`));
+    else if (hit) {
+      fp++;
+      errors.push(`FP ${p.id} ${p.variation}`);
+    } else if (p.same) {
+      fn++;
+      errors.push(`FN ${p.id} ${p.variation}`);
+    }
   }
   return { ...precisionRecall({ tp, fp, fn }), tp, fp, fn, errors };
 }

@@ -5,6 +5,7 @@ import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { getArticle } from "@/lib/corpus/articles";
+import { listVenues } from "@/db/queries/venues";
 import type { Section } from "@/lib/vocabulary";
 import { SourcingBadge } from "@/components/ui/sourcing-badge";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -34,7 +35,7 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
   if (!detail) notFound();
   const { article: a, statements, counts } = detail;
   const curate = can(actor, "corpus:curate");
-  const venues = curate ? await db.selectFrom("venues").select(["id", "name"]).orderBy("name").execute() : [];
+  const venues = curate ? await listVenues(db) : [];
   const bySection = SECTION_ORDER.map((s) => ({ section: s, items: statements.filter((x) => x.section === s) })).filter(
     (g) => g.items.length,
   );

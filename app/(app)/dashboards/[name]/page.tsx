@@ -2,7 +2,7 @@ import { Suspense } from "react";
 import { notFound } from "next/navigation";
 import { requirePage } from "@/lib/server/session";
 import { getDb } from "@/db";
-import { venueOptions } from "@/lib/dashboards/venues";
+import { listVenues } from "@/db/queries/venues";
 import { DashboardTabs, DASHBOARD_TABS } from "@/components/dashboards/dashboard-tabs";
 import { FiltersBar } from "@/components/dashboards/filters-bar";
 import { DashboardView } from "@/components/dashboards/dashboard-view";
@@ -19,7 +19,7 @@ export default async function DashboardPage({
   const tab = DASHBOARD_TABS.find((t) => t.name === name);
   if (!tab) notFound();
   const search = new URLSearchParams(await searchParams).toString();
-  const venues = await venueOptions(getDb());
+  const venues = await listVenues(getDb());
   return (
     <div className="space-y-4">
       <h1 className="font-serif text-3xl font-semibold">{tab.label}</h1>

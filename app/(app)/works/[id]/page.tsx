@@ -5,6 +5,7 @@ import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { workDetail } from "@/lib/graph/work-detail";
+import { practiceOptions } from "@/db/queries/practices";
 import { CurateWork, SourceCheckForm } from "@/components/works/work-forms";
 
 const VERDICT: Record<string, string> = {
@@ -22,7 +23,7 @@ export default async function WorkPage({ params }: { params: Promise<{ id: strin
   const d = await workDetail(db, id);
   if (!d) notFound();
   const curator = can(actor, "corpus:curate");
-  const practices = curator ? await db.selectFrom("practices").select(["id", "label"]).orderBy("label").execute() : [];
+  const practices = curator ? await practiceOptions(db) : [];
   return (
     <div className="space-y-4">
       <h1 className="font-serif text-3xl font-semibold">{d.work.title ?? d.work.first_author ?? "Untitled work"}</h1>

@@ -10,12 +10,16 @@ import type { Role } from "@/lib/vocabulary";
 export const POST = route({ permission: "admin:users", body: inviteSchema }, async ({ actor, body }) => {
   let created;
   try {
-    created = await createInvitation(getDb(), {
-      email: body.email,
-      role: body.role as Role,
-      venueIds: body.venueIds,
-      invitedBy: actor.id,
-    });
+    created = await getDb()
+      .transaction()
+      .execute((trx) =>
+        createInvitation(trx, {
+          email: body.email,
+          role: body.role as Role,
+          venueIds: body.venueIds,
+          invitedBy: actor.id,
+        }),
+      );
   } catch (err) {
     if (isUniqueViolation(err))
       throw new HttpError(409, "exists", "Someone with that e-mail already has an account.", "email");

@@ -1,27 +1,27 @@
 import { z } from "zod";
-import { route } from "@/lib/server/request";
+import { idParams, route } from "@/lib/server/request";
 import { getDb } from "@/db";
-import { HttpError, notFound } from "@/lib/server/errors";
+import { notFound } from "@/lib/server/errors";
 import { setWorkType } from "@/lib/graph/works";
 import { workDetail } from "@/lib/graph/work-detail";
 import { rebuildAllSoon } from "@/lib/graph/rebuild";
+import { WORK_TYPES } from "@/lib/vocabulary";
 
-const id = (s: string | undefined) => {
-  const r = z.uuid().safeParse(s);
-  if (!r.success) throw new HttpError(400, "invalid", "That is not a work id.", "id");
-  return r.data;
-};
-
-export const GET = route({ permission: "corpus:read" }, async ({ params }) => {
-  const w = await workDetail(getDb(), id(params.id));
+export const GET = route({ permission: "corpus:read", params: idParams, notFound: "That work" }, async ({ params }) => {
+  const w = await workDetail(getDb(), params.id);
   if (!w) throw notFound("That work");
   return w;
 });
 
 export const PATCH = route(
-  { permission: "corpus:curate", body: z.object({ workType: z.enum(["methods_source", "empirical", "unknown"]) }) },
+  {
+    permission: "corpus:curate",
+    params: idParams,
+    notFound: "That work",
+    body: z.object({ workType: z.enum(WORK_TYPES) }),
+  },
   async ({ params, body }) => {
-    await setWorkType(getDb(), id(params.id), body.workType);
+    await setWorkType(getDb(), params.id, body.workType);
     await rebuildAllSoon(getDb());
     return { ok: true };
   },

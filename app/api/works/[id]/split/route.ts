@@ -1,7 +1,6 @@
 import { z } from "zod";
-import { route } from "@/lib/server/request";
+import { idParams, route } from "@/lib/server/request";
 import { getDb } from "@/db";
-import { HttpError } from "@/lib/server/errors";
 import { splitWork } from "@/lib/graph/works";
 import { rebuildAllSoon } from "@/lib/graph/rebuild";
 
@@ -9,13 +8,14 @@ import { rebuildAllSoon } from "@/lib/graph/rebuild";
 export const POST = route(
   {
     permission: "corpus:curate",
+    params: idParams,
+    notFound: "That work",
     body: z.object({ referenceIds: z.array(z.uuid()).min(1, "Choose at least one reference.").max(1000) }),
   },
   async ({ params, body }) => {
-    const from = z.uuid().safeParse(params.id);
-    if (!from.success) throw new HttpError(400, "invalid", "That is not a work id.", "id");
-    const workId = await splitWork(getDb(), from.data, body.referenceIds);
-    await rebuildAllSoon(getDb());
+    const db = getDb();
+    const workId = await db.transaction().execute((trx) => splitWork(trx, params.id, body.referenceIds));
+    await rebuildAllSoon(db);
     return { ok: true, workId };
   },
 );
