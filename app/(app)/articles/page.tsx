@@ -4,7 +4,7 @@ import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { ArticleFilters, ARTICLE_STATUSES, listArticles } from "@/lib/corpus/articles";
 import { EmptyState } from "@/components/ui/empty-state";
-import { STATUS_LABEL } from "@/components/upload/status";
+import { LABELS } from "@/lib/vocabulary";
 
 export const metadata = { title: "Articles" };
 
@@ -43,7 +43,7 @@ export default async function ArticlesPage({
             <option value="">Any</option>
             {ARTICLE_STATUSES.map((s) => (
               <option key={s} value={s}>
-                {STATUS_LABEL[s]}
+                {LABELS.articleStatus[s]}
               </option>
             ))}
           </select>
@@ -123,7 +123,7 @@ export default async function ArticlesPage({
                 <td className="py-1.5 pr-3">{a.venue ?? "—"}</td>
                 <td className="py-1.5 pr-3 tabular-nums">{a.year ?? "—"}</td>
                 <td className="py-1.5 pr-3">
-                  {STATUS_LABEL[a.status]}
+                  {LABELS.articleStatus[a.status]}
                   {a.status === "failed" && a.failure_message && (
                     <span className="block text-xs text-ink-2">{a.failure_message}</span>
                   )}
