@@ -5,13 +5,12 @@ import type { DashboardPayload } from "@/lib/dashboards";
 import type { DashboardName } from "@/lib/vocabulary";
 
 /** The practice a dashboard shows, with how many statements are matched to it. */
-export type ShownPractice = NonNullable<DashboardPayload["practice"]> & { matched?: number };
-export type DashboardData = Omit<DashboardPayload, "practice"> & { practice: ShownPractice | null };
+export type ShownPractice = NonNullable<DashboardPayload["practice"]>;
 
 /** One dashboard under the filters of the URL (`search`); the key holds both, so each view caches apart. */
 export function useDashboard(name: DashboardName, search: string) {
   return useQuery({
     queryKey: ["dashboard", name, search],
-    queryFn: () => fetchJson<DashboardData>(`/api/dashboards/${name}?${search}`),
+    queryFn: () => fetchJson<DashboardPayload>(`/api/dashboards/${name}?${search}`),
   });
 }

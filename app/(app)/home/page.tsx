@@ -3,6 +3,7 @@ import { sql } from "kysely";
 import { requirePage } from "@/lib/server/session";
 import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
+import { plural } from "@/lib/vocabulary";
 import { EmptyState } from "@/components/ui/empty-state";
 
 export const metadata = { title: "Home" };
@@ -83,7 +84,7 @@ export default async function HomePage() {
             {Number(counts.failed) > 0 && can(actor, "corpus:curate") && (
               <li>
                 <Link className="underline" href="/articles?status=failed">
-                  {Number(counts.failed)} articles failed to mine: see why
+                  {plural(Number(counts.failed), "article")} failed to mine: see why
                 </Link>
               </li>
             )}
