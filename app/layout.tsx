@@ -9,8 +9,11 @@ export const metadata: Metadata = {
   description: "How research methods are used across a discipline: cut-offs, their sources, and how they spread.",
 };
 
-// Applied before paint so the dark theme does not flash.
-const themeScript = `try{var t=localStorage.getItem('echoline-theme');if(t==='dark'||(!t&&matchMedia('(prefers-color-scheme: dark)').matches))document.documentElement.classList.add('dark')}catch(e){}`;
+// Applied before paint so the dark theme does not flash. It also turns off zod's compiled parsers in
+// the browser before any bundle loads: zod probes for them with Function(""), which the
+// Content-Security-Policy (no 'unsafe-eval', next.config.mjs) refuses and reports as a violation.
+// zod reads this global as its shared configuration (zod/v4/core, globalConfig).
+const themeScript = `globalThis.__zod_globalConfig=Object.assign(globalThis.__zod_globalConfig||{},{jitless:true});try{var t=localStorage.getItem('echoline-theme');if(t==='dark'||(!t&&matchMedia('(prefers-color-scheme: dark)').matches))document.documentElement.classList.add('dark')}catch(e){}`;
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (

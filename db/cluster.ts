@@ -25,7 +25,7 @@ export function databaseUrl(name: ClusterName, database: string): string {
 
 const isRoot = process.getuid?.() === 0;
 
-function findBinDir(): string | null {
+export function findBinDir(): string | null {
   const base = "/usr/lib/postgresql";
   if (!fs.existsSync(base)) return null;
   const versions = fs

@@ -43,6 +43,8 @@ export function stackEnv(cfg: StackConfig): NodeJS.ProcessEnv {
     MAIL_FAKE_HTTP_PORT: String(cfg.mailHttpPort),
     MAIL_FAKE_URL: `http://127.0.0.1:${cfg.mailHttpPort}`,
     MAIL_FAKE_DIR: path.join(cfg.dataDir, "mail"),
+    // Generated once per start (kept in process.env by the caller): the web server reads captured mail with it.
+    MAIL_FAKE_TOKEN: process.env.MAIL_FAKE_TOKEN || randomBytes(24).toString("base64url"),
     ECHOLINE_DATA_DIR: cfg.dataDir,
     NEXT_TELEMETRY_DISABLED: "1",
   };

@@ -2,6 +2,7 @@
 import { TrailGraph } from "./trail-graph";
 import { useStatementTrail } from "./use-trail";
 import { DataTable } from "@/components/dashboards/data-table";
+import { toCsv } from "@/lib/dashboards/csv";
 
 export function StatementTrail({ statementId, practiceId }: { statementId: string; practiceId?: string }) {
   const q = useStatementTrail(statementId, practiceId);
@@ -19,7 +20,7 @@ export function StatementTrail({ statementId, practiceId }: { statementId: strin
       <DataTable
         id="table-trail"
         table={{ title: "Citations along this trail", columns: q.data.columns, rows: q.data.rows }}
-        csvHref={`data:text/csv;charset=utf-8,${encodeURIComponent([q.data.columns.join(","), ...q.data.rows.map((r) => q.data.columns.map((c) => JSON.stringify(r[c] ?? "")).join(","))].join("\n"))}`}
+        csvHref={`data:text/csv;charset=utf-8,${encodeURIComponent(toCsv(q.data.columns, q.data.rows))}`}
       />
     </div>
   );

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { sql } from "kysely";
 import type { DB } from "@/db";
-import { STATISTIC_KEYS } from "@/lib/practices";
+import { ASSERTING_FRAMINGS, STATISTIC_KEYS } from "@/lib/vocabulary";
 
 const uuidList = z
   .string()
@@ -21,7 +21,8 @@ export const filtersSchema = z.object({
   from: year.optional(),
   to: year.optional(),
   statistic: z.enum(STATISTIC_KEYS).optional(),
-  framing: z.enum(["fixed", "contextual"]).optional(),
+  // Disputed statements never assert a practice, so dashboards filter on the asserting framings only.
+  framing: z.enum(ASSERTING_FRAMINGS).optional(),
 });
 export type Filters = z.infer<typeof filtersSchema>;
 

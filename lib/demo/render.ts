@@ -6,7 +6,7 @@
  */
 import { existsSync, readFileSync } from "node:fs";
 import PDFDocument from "pdfkit";
-import Papa from "papaparse";
+import { unparseCsv } from "@/lib/csv";
 import type { DemoArticle, DemoCorpus, DemoPerson } from "./corpus";
 
 // Greek letters and ≥/≤ are outside the WinAnsi encoding of the 14 core PDF fonts, so the body
@@ -299,7 +299,7 @@ export function metadataRows(corpus: DemoCorpus): MetadataRow[] {
 
 /** CSV with a header row (doi, title, authors separated by "; ", year, venue, licence). */
 export function renderMetadataCsv(corpus: DemoCorpus): string {
-  return `${Papa.unparse(metadataRows(corpus), { columns: ["filename", "doi", "title", "authors", "year", "venue", "licence"], newline: "\n" })}\n`;
+  return `${unparseCsv(metadataRows(corpus), { columns: ["filename", "doi", "title", "authors", "year", "venue", "licence"], newline: "\n" })}\n`;
 }
 
 const bibEscape = (s: string) => s.replace(/([&%$#_{}])/g, "\\$1");

@@ -14,6 +14,9 @@ export interface FileStorage {
 }
 
 const SHA256 = /^[0-9a-f]{64}$/;
+// Uploaded manuscripts can be confidential: only the account that runs Echoline may read them.
+export const FILE_MODE = 0o600;
+export const DIR_MODE = 0o700;
 
 export function folderStorage(dir = path.join(process.cwd(), ".data", "files")): FileStorage {
   const root = path.resolve(dir);
@@ -36,10 +39,10 @@ export function folderStorage(dir = path.join(process.cwd(), ".data", "files")):
       } catch {
         // not stored yet
       }
-      await fs.mkdir(/*turbopackIgnore: true*/ path.dirname(full), { recursive: true });
+      await fs.mkdir(/*turbopackIgnore: true*/ path.dirname(full), { recursive: true, mode: DIR_MODE });
       // Write then rename: a reader (or a concurrent upload of the same file) never sees half a file.
       const tmp = `${full}.${process.pid}.${randomBytes(4).toString("hex")}.tmp`;
-      await fs.writeFile(/*turbopackIgnore: true*/ tmp, data);
+      await fs.writeFile(/*turbopackIgnore: true*/ tmp, data, { mode: FILE_MODE });
       await fs.rename(/*turbopackIgnore: true*/ tmp, full);
       return key;
     },
@@ -72,9 +75,14 @@ let defaultStorage: FileStorage | null = null;
  * ECHOLINE_FILES_DIR, else `files/` inside ECHOLINE_DATA_DIR (set by the process stack), else .data/files.
  */
 export function getStorage(): FileStorage {
-  const dir =
-    process.env.ECHOLINE_FILES_DIR ??
-    (process.env.ECHOLINE_DATA_DIR ? path.join(process.env.ECHOLINE_DATA_DIR, "files") : undefined);
-  defaultStorage ??= folderStorage(dir);
+  defaultStorage ??= folderStorage(storageDir());
   return defaultStorage;
+}
+
+/** The folder getStorage() uses (the backup script copies it). */
+export function storageDir(env: NodeJS.ProcessEnv = process.env): string {
+  return path.resolve(
+    env.ECHOLINE_FILES_DIR ??
+      (env.ECHOLINE_DATA_DIR ? path.join(env.ECHOLINE_DATA_DIR, "files") : path.join(process.cwd(), ".data", "files")),
+  );
 }

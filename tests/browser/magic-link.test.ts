@@ -1,6 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import pg from "pg";
-import { launchBrowser, APP_URL, MAIL_URL, E2E_DATABASE_URL, demoAccount, waitForMail } from "../helpers/browser";
+import {
+  launchBrowser,
+  APP_URL,
+  MAIL_URL,
+  E2E_DATABASE_URL,
+  demoAccount,
+  waitForMail,
+  mailFakeHeaders,
+} from "../helpers/browser";
 
 let b: Awaited<ReturnType<typeof launchBrowser>>;
 beforeAll(async () => {
@@ -59,7 +67,9 @@ describe("magic-link sign-in through the mail fake", () => {
     const email = "stranger@echoline.local";
     await requestLink(email);
     await expect(b.page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Check your e-mail");
-    const list = (await (await fetch(`${MAIL_URL}/messages?to=${email}`)).json()) as unknown[];
+    const list = (await (
+      await fetch(`${MAIL_URL}/messages?to=${email}`, { headers: mailFakeHeaders() })
+    ).json()) as unknown[];
     expect(list).toEqual([]);
   });
 });

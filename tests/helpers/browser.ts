@@ -1,8 +1,10 @@
 import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { inject } from "vitest";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { DEMO_ACCOUNTS } from "@/db/seed";
+import { databaseUrl } from "@/db/cluster";
 import type { Role } from "@/db/schema/accounts";
 
 // ECHOLINE_E2E_PORT_BASE moves the browser suite's ports (app = base, SMTP = base - 475, mail page =
@@ -10,7 +12,8 @@ import type { Role } from "@/db/schema/accounts";
 export const E2E_PORT_BASE = Number(process.env.ECHOLINE_E2E_PORT_BASE ?? 3100);
 export const APP_URL = `http://localhost:${E2E_PORT_BASE}`;
 export const MAIL_URL = `http://127.0.0.1:${E2E_PORT_BASE - 474}`;
-export const E2E_DATABASE_URL = "postgres://postgres@127.0.0.1:54321/echoline_e2e";
+// The test cluster of this checkout (ECHOLINE_TEST_PG_PORT), as tests/setup/app-global.ts uses it.
+export const E2E_DATABASE_URL = databaseUrl("test", "echoline_e2e");
 
 // Launch flags for Debian's Chromium on this closed network (no background connections).
 const ARGS = [
@@ -61,11 +64,16 @@ export async function signInAs(page: Page, role: Role): Promise<void> {
 
 export type Mail = { id: string; to: string[]; subject: string; text: string };
 
+/** The header that opens the mail fake's API (its token comes from tests/setup/app-global.ts). */
+export function mailFakeHeaders(): Record<string, string> {
+  return { "x-mail-fake-token": inject("mailFakeToken") };
+}
+
 /** Waits until the mail fake holds a message for `to` newer than `after` (polls its API; no sleeps as proxies). */
 export async function waitForMail(to: string, after: number, timeoutMs = 20_000): Promise<Mail> {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
-    const r = await fetch(`${MAIL_URL}/messages?to=${encodeURIComponent(to)}`);
+    const r = await fetch(`${MAIL_URL}/messages?to=${encodeURIComponent(to)}`, { headers: mailFakeHeaders() });
     const list = (await r.json()) as (Mail & { at: string })[];
     const m = list.find((x) => Date.parse(x.at) >= after);
     if (m) return m;

@@ -3,6 +3,7 @@
  * ports, against a fresh test database seeded with the demo accounts. Never the user's data.
  */
 import type { Kysely } from "kysely";
+import type { TestProject } from "vitest/node";
 import pg from "pg";
 import path from "node:path";
 import fs from "node:fs";
@@ -23,7 +24,14 @@ export const E2E = {
 
 let stack: Stack | null = null;
 
-export default async function setup() {
+declare module "vitest" {
+  export interface ProvidedContext {
+    /** The mail fake's HTTP token of this run (tests read captured mail with it). */
+    mailFakeToken: string;
+  }
+}
+
+export default async function setup(project: TestProject) {
   up("test");
   if (process.env.ECHOLINE_TEMPLATE_READY !== "1") await prepareTemplate();
   const admin = new pg.Client({ connectionString: databaseUrl("test", "postgres") });
@@ -47,6 +55,7 @@ export default async function setup() {
   await seedAll(db);
   await db.destroy();
   stack = await startStack(cfg);
+  project.provide("mailFakeToken", process.env.MAIL_FAKE_TOKEN ?? "");
   return async () => {
     await stack?.stop();
   };

@@ -47,6 +47,12 @@ describe("matchPractices", () => {
     expect(matchPractices(st({ value: 0.72 }), all, { tolerance: 0.03 })).toEqual(["a70f", "a70"]);
   });
 
+  it("never counts a disputed statement as asserting a practice, whatever the practice's framing", () => {
+    // product.md, "framing": disputed = names the cut-off to argue against it.
+    expect(matchPractices(st({ framing: "disputed" }), all)).toEqual([]);
+    expect(matchPractices(st({ framing: "contextual" }), all)).toEqual(["a70"]);
+  });
+
   it("requires the framing only when the practice sets one", () => {
     expect(matchPractices(st({ framing: "contextual" }), all)).toEqual(["a70"]);
     expect(matchPractices(st({ framing: null }), all)).toEqual(["a70"]);

@@ -11,7 +11,11 @@ export default async function MailPage() {
   const base = process.env.MAIL_FAKE_URL ?? `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 2526}`;
   let mails: Mail[] | null = null;
   try {
-    const res = await fetch(`${base}/messages`, { cache: "no-store" });
+    // Server-side only: the token never reaches the browser.
+    const res = await fetch(`${base}/messages`, {
+      cache: "no-store",
+      headers: { "x-mail-fake-token": process.env.MAIL_FAKE_TOKEN ?? "" },
+    });
     mails = res.ok ? ((await res.json()) as Mail[]) : null;
   } catch {
     mails = null;
@@ -20,11 +24,8 @@ export default async function MailPage() {
     <div className="grid gap-4">
       <h1 className="font-serif text-3xl font-semibold">Captured mail</h1>
       <p className="text-ink-2">
-        Every e-mail Echoline sends in local mode is caught by the mail fake (also at{" "}
-        <a className="underline" href={base.replace("127.0.0.1", "localhost")}>
-          its own page
-        </a>
-        ).
+        Every e-mail Echoline sends in local mode is caught by the mail fake (also on its own page, at the address with
+        its key that <code>npm start</code> prints).
       </p>
       {mails === null ? (
         <p role="alert">
