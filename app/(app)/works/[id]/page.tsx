@@ -31,8 +31,9 @@ export default async function WorkPage({ params }: { params: Promise<{ id: strin
         </p>
         <h1 className="font-serif text-3xl font-semibold">{d.work.title ?? d.work.first_author ?? "Untitled work"}</h1>
         <p className="text-ink-2">
-          {d.work.year ?? "n.d."} · {labelOf("workType", d.work.work_type)} (
-          {labelOf("workTypeDecider", d.work.type_decided_by)}){d.work.doi && <> · DOI {d.work.doi}</>}
+          {d.work.year ?? "n.d."} · {labelOf("workType", d.work.work_type)},{" "}
+          {labelOf("workTypeDecider", d.work.type_decided_by)}
+          {d.work.doi && <> · DOI {d.work.doi}</>}
         </p>
         {d.article && (
           <p>
