@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson, formErrorsOf } from "@/lib/http/fetch-json";
 import { inviteSchema, fieldErrors } from "@/lib/forms/accounts";
-import { ROLES } from "@/lib/vocabulary";
+import { LABELS, ROLES, type Role } from "@/lib/vocabulary";
 import { Field, FormError } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 
@@ -11,7 +11,7 @@ type User = {
   id: string;
   email: string;
   name: string | null;
-  role: string;
+  role: Role;
   active: boolean;
   hasPassword: boolean;
   invitationPending: boolean;
@@ -81,15 +81,17 @@ export function PeopleManager({ selfId }: { selfId: string }) {
               id="invite-role"
               name="role"
               defaultValue="reader"
+              aria-describedby="invite-role-err"
+              aria-invalid={errors.role ? true : undefined}
               className="rounded border border-rule bg-paper px-2 py-1.5"
             >
               {ROLES.map((r) => (
                 <option key={r} value={r}>
-                  {r}
+                  {LABELS.role[r]}
                 </option>
               ))}
             </select>
-            <p className="text-sm text-accent min-h-[1.25rem]" aria-live="polite">
+            <p id="invite-role-err" className="text-sm text-accent min-h-[1.25rem]" aria-live="polite">
               {errors.role ?? ""}
             </p>
           </div>
@@ -161,12 +163,12 @@ export function PeopleManager({ selfId }: { selfId: string }) {
                     >
                       {ROLES.map((r) => (
                         <option key={r} value={r}>
-                          {r}
+                          {LABELS.role[r]}
                         </option>
                       ))}
                     </select>
                   </td>
-                  <td>{u.active ? (u.invitationPending ? "invited" : "active") : "deactivated"}</td>
+                  <td>{u.active ? (u.invitationPending ? "Invited" : "Active") : "Deactivated"}</td>
                   <td className="text-right">
                     {u.id !== selfId && (
                       <Button

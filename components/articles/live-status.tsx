@@ -1,11 +1,14 @@
 "use client";
 import { useEffect, useRef } from "react";
 import { useRouter } from "next/navigation";
-import { useQuery } from "@tanstack/react-query";
-import { STATUS_LABEL, isFinished } from "@/components/upload/status";
-import type { ArticleStatus } from "@/lib/vocabulary";
+import { isFinished } from "@/components/upload/status";
+import { LABELS, type ArticleStatus } from "@/lib/vocabulary";
+import { useArticleStatus } from "./use-article";
 
-/** The article's status, polled while it is unfinished; the page re-renders when mining ends. */
+/**
+ * The article's status, polled from the light status endpoint while it is unfinished; the page
+ * re-renders (statements and counts) once when mining ends.
+ */
 export function LiveStatus({
   articleId,
   initial,
@@ -16,17 +19,7 @@ export function LiveStatus({
   reason: string | null;
 }) {
   const router = useRouter();
-  const q = useQuery({
-    queryKey: ["article-status", articleId],
-    queryFn: async () => {
-      const res = await fetch(`/api/articles/${articleId}`);
-      const body = (await res.json()) as { article: { status: ArticleStatus; failure_message: string | null } };
-      return body.article;
-    },
-    initialData: { status: initial, failure_message: reason },
-    refetchInterval: (query) => (isFinished(query.state.data?.status ?? initial) ? false : 1000),
-    staleTime: 0,
-  });
+  const q = useArticleStatus(articleId, { status: initial, failure_message: reason });
   const status = q.data?.status ?? initial;
   const last = useRef(initial);
   useEffect(() => {
@@ -36,7 +29,7 @@ export function LiveStatus({
   return (
     <p aria-live="polite">
       <span className={`font-medium ${status === "failed" ? "text-accent" : ""}`} data-testid="article-status">
-        {STATUS_LABEL[status]}
+        {LABELS.articleStatus[status]}
       </span>
       {status === "failed" && q.data?.failure_message && (
         <span className="ml-2 text-ink-2">{q.data.failure_message}</span>

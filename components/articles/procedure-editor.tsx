@@ -1,7 +1,11 @@
 "use client";
-import { useId, useState } from "react";
+import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { ProcedureInput } from "@/lib/corpus/schemas";
+import { procedureSchema } from "@/lib/forms/procedure";
+import { Field, FormError, FormStatus, TextareaField } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+import { useFormErrors } from "@/components/ui/use-form-errors";
+import { useSaveProcedure } from "./use-procedures";
 
 type Proc = {
   id?: string;
@@ -13,111 +17,94 @@ type Proc = {
   noneOf?: string[];
   enabled: boolean;
 };
-type Field = "key" | "label" | "description" | "allOf" | "anyOf" | "noneOf";
+
+const lines = (v: FormDataEntryValue | null) =>
+  String(v ?? "")
+    .split("\n")
+    .map((s) => s.trim())
+    .filter(Boolean);
 
 /** Edit or add one known misdescribed procedure; patterns are regular expressions, one per line. */
 export function ProcedureEditor({ proc }: { proc: Proc | null }) {
   const router = useRouter();
-  const id = useId();
-  const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
-  const [note, setNote] = useState<string | null>(null);
-  const lines = (v: FormDataEntryValue | null) =>
-    String(v ?? "")
-      .split("\n")
-      .map((s) => s.trim())
-      .filter(Boolean);
-
-  async function submit(e: React.FormEvent<HTMLFormElement>) {
-    e.preventDefault();
-    const fd = new FormData(e.currentTarget);
-    const input = {
-      key: String(fd.get("key") ?? ""),
-      label: String(fd.get("label") ?? ""),
-      description: String(fd.get("description") ?? ""),
-      allOf: lines(fd.get("allOf")),
-      anyOf: lines(fd.get("anyOf")),
-      noneOf: lines(fd.get("noneOf")),
-      enabled: fd.get("enabled") === "on",
-    };
-    const r = ProcedureInput.safeParse(input);
-    if (!r.success) {
-      const next: Partial<Record<Field, string>> = {};
-      for (const i of r.error.issues) next[i.path[0] as Field] ??= i.message;
-      setErrors(next);
-      return;
-    }
-    setErrors({});
-    const res = await fetch(proc?.id ? `/api/procedures/${proc.id}` : "/api/procedures", {
-      method: proc?.id ? "PUT" : "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify(r.data),
-    });
-    if (res.ok) {
-      setNote("Saved. Workers use it from the next article they mine.");
-      router.refresh();
-    } else {
-      const b = (await res.json().catch(() => null)) as { error?: { message?: string; field?: string } } | null;
-      setErrors({ [(b?.error?.field ?? "label").split(".")[0] as Field]: b?.error?.message ?? "Could not save." });
-    }
-  }
-  const f = (name: Field) => ({
-    id: `${id}-${name}`,
-    name,
-    "aria-invalid": errors[name] ? true : undefined,
-    "aria-describedby": `${id}-${name}-e`,
-    className: "w-full rounded border border-rule bg-paper px-2 py-1 font-mono text-sm",
-  });
-  const err = (name: Field) => (
-    <span id={`${id}-${name}-e`} className="text-sm text-accent" aria-live="polite">
-      {errors[name] ?? ""}
-    </span>
-  );
+  const form = useFormErrors(procedureSchema);
+  const [saved, setSaved] = useState<string>();
+  const save = useSaveProcedure(proc?.id);
+  const mono = "font-mono text-sm";
   return (
-    <form onSubmit={submit} noValidate className="grid gap-2 rounded border border-rule p-4">
+    <form
+      noValidate
+      className="grid gap-1 rounded border border-rule p-4"
+      aria-label={proc ? `Procedure ${proc.label}` : "Add a procedure"}
+      onSubmit={(e) => {
+        e.preventDefault();
+        setSaved(undefined);
+        const fd = new FormData(e.currentTarget);
+        const data = form.check({
+          key: String(fd.get("key") ?? ""),
+          label: String(fd.get("label") ?? ""),
+          description: String(fd.get("description") ?? ""),
+          allOf: lines(fd.get("allOf")),
+          anyOf: lines(fd.get("anyOf")),
+          noneOf: lines(fd.get("noneOf")),
+          enabled: fd.get("enabled") === "on",
+        });
+        if (!data) return;
+        save.mutate(data, {
+          onSuccess: () => {
+            setSaved("Saved. Workers use it from the next article they mine.");
+            router.refresh();
+          },
+          onError: form.fail,
+        });
+      }}
+    >
       <div className="grid gap-2 sm:grid-cols-2">
-        <label className="grid gap-1">
-          <span>Key</span>
-          <input {...f("key")} defaultValue={proc?.key ?? ""} />
-          {err("key")}
-        </label>
-        <label className="grid gap-1">
-          <span>Label</span>
-          <input {...f("label")} defaultValue={proc?.label ?? ""} />
-          {err("label")}
-        </label>
+        <Field label="Key" name="key" className={mono} defaultValue={proc?.key ?? ""} error={form.errors.key} />
+        <Field label="Label" name="label" defaultValue={proc?.label ?? ""} error={form.errors.label} />
       </div>
-      <label className="grid gap-1">
-        <span>What is misdescribed</span>
-        <textarea {...f("description")} rows={2} defaultValue={proc?.description ?? ""} />
-        {err("description")}
-      </label>
+      <TextareaField
+        label="What is misdescribed"
+        name="description"
+        rows={2}
+        defaultValue={proc?.description ?? ""}
+        error={form.errors.description}
+      />
       <div className="grid gap-2 sm:grid-cols-3">
-        <label className="grid gap-1">
-          <span>All of (each must match)</span>
-          <textarea {...f("allOf")} rows={3} defaultValue={proc?.allOf.join("\n") ?? ""} />
-          {err("allOf")}
-        </label>
-        <label className="grid gap-1">
-          <span>Any of (one must match)</span>
-          <textarea {...f("anyOf")} rows={3} defaultValue={proc?.anyOf?.join("\n") ?? ""} />
-          {err("anyOf")}
-        </label>
-        <label className="grid gap-1">
-          <span>None of (excludes)</span>
-          <textarea {...f("noneOf")} rows={3} defaultValue={proc?.noneOf?.join("\n") ?? ""} />
-          {err("noneOf")}
-        </label>
+        <TextareaField
+          label="All of (each must match)"
+          name="allOf"
+          rows={3}
+          className={mono}
+          defaultValue={proc?.allOf.join("\n") ?? ""}
+          error={form.errors.allOf}
+        />
+        <TextareaField
+          label="Any of (one must match)"
+          name="anyOf"
+          rows={3}
+          className={mono}
+          defaultValue={proc?.anyOf?.join("\n") ?? ""}
+          error={form.errors.anyOf}
+        />
+        <TextareaField
+          label="None of (excludes)"
+          name="noneOf"
+          rows={3}
+          className={mono}
+          defaultValue={proc?.noneOf?.join("\n") ?? ""}
+          error={form.errors.noneOf}
+        />
       </div>
+      <FormError message={form.errors.form} />
       <div className="flex items-center gap-4">
         <label className="flex items-center gap-2">
           <input type="checkbox" name="enabled" defaultChecked={proc?.enabled ?? true} /> Enabled
         </label>
-        <button type="submit" className="rounded bg-ink px-3 py-1.5 text-paper">
+        <Button type="submit" disabled={save.isPending}>
           {proc?.id ? "Save" : "Add procedure"}
-        </button>
-        <span aria-live="polite" className="text-sm">
-          {note}
-        </span>
+        </Button>
+        <FormStatus message={saved} />
       </div>
     </form>
   );

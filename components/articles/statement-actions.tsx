@@ -1,6 +1,8 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
+import type { ReviewVerdict } from "@/lib/vocabulary";
+import { useRemineArticle, useReviewStatement } from "./use-article";
 
 export function ReviewButtons({
   articleId,
@@ -9,29 +11,17 @@ export function ReviewButtons({
 }: {
   articleId: string;
   statementId: string;
-  mine: "correct" | "incorrect" | "corrected" | null;
+  mine: ReviewVerdict | null;
 }) {
   const [verdict, setVerdict] = useState(mine);
-  const [error, setError] = useState<string | null>(null);
-  async function send(v: "correct" | "incorrect") {
-    setError(null);
-    const r = await fetch(`/api/articles/${articleId}/statements/${statementId}/review`, {
-      method: "PUT",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ verdict: v }),
-    });
-    if (r.ok) setVerdict(v);
-    else
-      setError(
-        ((await r.json().catch(() => null)) as { error?: { message?: string } } | null)?.error?.message ??
-          "Could not save the review.",
-      );
-  }
+  const review = useReviewStatement(articleId, statementId);
+  const send = (v: "correct" | "incorrect") => review.mutate(v, { onSuccess: () => setVerdict(v) });
   return (
     <span className="inline-flex items-center gap-2 text-sm" role="group" aria-label="Review this statement">
       <button
         type="button"
         aria-pressed={verdict === "correct"}
+        disabled={review.isPending}
         onClick={() => send("correct")}
         className={`rounded border px-2 py-0.5 ${verdict === "correct" ? "border-ink bg-ink text-paper" : "border-rule"}`}
       >
@@ -40,13 +30,14 @@ export function ReviewButtons({
       <button
         type="button"
         aria-pressed={verdict === "incorrect"}
+        disabled={review.isPending}
         onClick={() => send("incorrect")}
         className={`rounded border px-2 py-0.5 ${verdict === "incorrect" ? "border-accent bg-accent text-paper" : "border-rule"}`}
       >
         Incorrect
       </button>
       <span aria-live="polite" className="text-accent">
-        {error}
+        {review.error?.message}
       </span>
     </span>
   );
@@ -54,27 +45,23 @@ export function ReviewButtons({
 
 export function RemineButton({ articleId }: { articleId: string }) {
   const router = useRouter();
-  const [msg, setMsg] = useState<string | null>(null);
+  const remine = useRemineArticle(articleId);
   return (
     <span className="inline-flex items-center gap-2">
       <button
         type="button"
         className="rounded border border-rule px-3 py-1 hover:bg-paper-2"
-        onClick={async () => {
-          const r = await fetch(`/api/articles/${articleId}/remine`, { method: "POST" });
-          const body = (await r.json().catch(() => null)) as { error?: { message?: string } } | null;
-          setMsg(
-            r.ok
-              ? "Queued for re-mining; reviews stay with their statements."
-              : (body?.error?.message ?? "Could not queue the article."),
-          );
-          router.refresh();
-        }}
+        disabled={remine.isPending}
+        onClick={() => remine.mutate(undefined, { onSuccess: () => router.refresh() })}
       >
         Re-mine
       </button>
       <span aria-live="polite" className="text-sm text-ink-2">
-        {msg}
+        {remine.isSuccess
+          ? "Queued for re-mining; reviews stay with their statements."
+          : remine.isError
+            ? remine.error.message
+            : null}
       </span>
     </span>
   );

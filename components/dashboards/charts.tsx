@@ -14,7 +14,7 @@ const theme = {
 // The sourcing colours and patterns of components/ui/sourcing.ts, so colour is never the only signal.
 const SOURCING_SERIES: BarSeries[] = SOURCING_ORDER.map((x) => ({
   key: x,
-  label: SOURCING[x].short,
+  label: SOURCING[x].label,
   color: SOURCING[x].color,
   pattern: SOURCING[x].pattern,
 }));

@@ -1,37 +1,33 @@
 "use client";
 import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
-import { useQuery } from "@tanstack/react-query";
-import type { DashboardPayload } from "@/lib/dashboards";
+import { LABELS, formatValue, labelOf, plural, type DashboardName } from "@/lib/vocabulary";
 import { DataTable } from "./data-table";
+import { useDashboard, type ShownPractice } from "./use-dashboard";
 import { ShareLineChart, SimpleBarChart, SourcingByYearChart, type BarSeries } from "./charts";
 import type { Row } from "@/lib/dashboards/csv";
 import { EmptyState } from "@/components/ui/empty-state";
 import { TrailGraph, type TrailGraphData } from "@/components/trails/trail-graph";
 
-export type DashboardKind = "practice-over-time" | "trail-ends" | "venues" | "drift" | "trail-graph";
-
-export function useDashboard(name: DashboardKind, search: string) {
-  return useQuery({
-    queryKey: ["dashboard", name, search],
-    queryFn: async (): Promise<DashboardPayload> => {
-      const r = await fetch(`/api/dashboards/${name}?${search}`);
-      const body = await r.json();
-      if (!r.ok) throw new Error(body?.error?.message ?? "The dashboard could not be loaded.");
-      return body;
-    },
-  });
-}
-
-// Where a trail ends, in the words of product.md. The last three are rare (a cycle, the depth limit, a
+// Where a trail ends, in the vocabulary's words. The last three are rare (a cycle, the depth limit, a
 // statement whose trail is not built yet) and share one bar segment; the table keeps them apart.
 const END_SERIES: BarSeries[] = [
-  { key: "methods_source_share", label: "methods source", color: "var(--ink)", pattern: "solid" },
-  { key: "empirical_precedent_share", label: "empirical precedent", color: "var(--accent)", pattern: "solid" },
-  { key: "unclassified_share", label: "work not yet typed", color: "var(--accent)", pattern: "lines" },
-  { key: "unresolved_share", label: "unresolved reference", color: "var(--ink-2)", pattern: "dots" },
-  { key: "no_citation_share", label: "no citation", color: "var(--rule)", pattern: "solid" },
-  { key: "other_share", label: "cycle, depth limit or not built", color: "var(--paper-2)", pattern: "cross" },
+  { key: "methods_source_share", label: LABELS.trailEnd.methods_source, color: "var(--ink)", pattern: "solid" },
+  {
+    key: "empirical_precedent_share",
+    label: LABELS.trailEnd.empirical_precedent,
+    color: "var(--accent)",
+    pattern: "solid",
+  },
+  { key: "unclassified_share", label: LABELS.trailEnd.unclassified, color: "var(--accent)", pattern: "lines" },
+  { key: "unresolved_share", label: LABELS.trailEnd.unresolved, color: "var(--ink-2)", pattern: "dots" },
+  { key: "no_citation_share", label: LABELS.trailEnd.no_citation, color: "var(--rule)", pattern: "solid" },
+  {
+    key: "other_share",
+    label: `${LABELS.trailEnd.cycle}, ${LABELS.trailEnd.depth_limit.toLowerCase()} or not built yet`,
+    color: "var(--paper-2)",
+    pattern: "cross",
+  },
 ];
 const withOtherEnds = (rows: Row[]) =>
   rows.map((r) => ({
@@ -43,13 +39,8 @@ const VENUE_SERIES: BarSeries[] = [
   { key: "rate", label: "articles asserting it", color: "var(--ink)", pattern: "solid" },
   { key: "in_venue_share", label: "in-venue precedent", color: "var(--accent)", pattern: "lines" },
 ];
-const WORK_TYPE: Record<string, string> = {
-  methods_source: "methods source",
-  empirical: "empirical application",
-  unknown: "not yet typed",
-};
 
-export function DashboardView({ name }: { name: DashboardKind }) {
+export function DashboardView({ name }: { name: DashboardName }) {
   const sp = useSearchParams();
   const router = useRouter();
   const search = sp.toString();
@@ -86,7 +77,12 @@ export function DashboardView({ name }: { name: DashboardKind }) {
   const nothing = Object.values(d.tables).every((t) => t.rows.length === 0);
   return (
     <div className="mt-4 space-y-6">
-      <h2 className="text-lg font-semibold">{d.practice.label}</h2>
+      <div>
+        <h2 className="text-lg font-semibold">{d.practice.label}</h2>
+        <p className="text-sm text-ink-2" data-testid="practice-shown">
+          {shownBecause(d.practice, sp.get("practice") === d.practice.id, !!sp.get("statistic"))}
+        </p>
+      </div>
       {d.notes.map((n) => (
         <p key={n} className="text-ink-2">
           {n}
@@ -145,8 +141,8 @@ export function DashboardView({ name }: { name: DashboardKind }) {
                   <Link className="underline" href={`/works/${r.work_id}`}>
                     {String(r.title ?? r.first_author ?? "Untitled work")}
                   </Link>{" "}
-                  ({String(r.year ?? "n.d.")}, {WORK_TYPE[String(r.work_type)] ?? String(r.work_type)}):{" "}
-                  {String(r.citations)} citations, {Math.round(Number(r.locator_rate) * 100)}% with a page
+                  ({String(r.year ?? "n.d.")}, {labelOf("workType", String(r.work_type)).toLowerCase()}):{" "}
+                  {plural(Number(r.citations), "citation")}, {Math.round(Number(r.locator_rate) * 100)}% with a page
                 </li>
               ))}
             </ol>
@@ -187,12 +183,12 @@ export function DashboardView({ name }: { name: DashboardKind }) {
               <li key={`${r.statement_id}-${r.work_id}`} className="rounded border border-rule p-3">
                 <p className="evidence">{String(r.sentence)}</p>
                 <p className="text-sm text-ink-2">
-                  Claims {String(r.claimed_value)};{" "}
+                  Claims {num(r.claimed_value)};{" "}
                   <Link className="underline" href={`/works/${r.work_id}`}>
                     {String(r.work_title ?? "the source")}
                   </Link>{" "}
-                  {r.verdict === "says_otherwise" ? "says otherwise" : "states"}{" "}
-                  {r.stated_value === null ? "" : String(r.stated_value)} (p. {String(r.page)}).{" "}
+                  {r.verdict === "says_otherwise" ? LABELS.sourceCheckVerdict.says_otherwise.toLowerCase() : "states"}{" "}
+                  {r.stated_value === null ? "" : num(r.stated_value)} (p. {String(r.page)}).{" "}
                   <Link className="underline" href={`/articles/${r.article_id}#statement-${r.statement_id}`}>
                     Read the sentence in its article
                   </Link>
@@ -206,7 +202,7 @@ export function DashboardView({ name }: { name: DashboardKind }) {
       {name === "trail-graph" && d.graph && (
         <section aria-labelledby="c3">
           <h3 id="c3" className="font-medium">
-            Trails of this practice, ordered in time (left: older; drag to pan, use the − button to see more)
+            Trails of this practice, ordered in time (left: older)
           </h3>
           <TrailGraph data={d.graph as TrailGraphData} />
           <DataTable id="table-edges" table={d.tables.edges} csvHref={csv("edges")} />
@@ -214,4 +210,13 @@ export function DashboardView({ name }: { name: DashboardKind }) {
       )}
     </div>
   );
+}
+
+const num = (v: unknown) => (v === null || v === undefined || v === "" ? "—" : formatValue(Number(v)));
+
+/** Says which practice a dashboard shows and why, so a default is never mistaken for a choice. */
+function shownBecause(p: ShownPractice, chosen: boolean, statistic: boolean): string {
+  const n = p.matched === undefined ? "" : plural(p.matched, "statement");
+  if (chosen) return `The practice you chose${n ? `: ${n} matched to it` : ""}.`;
+  return `Shown because it is the most asserted practice${statistic ? " of this statistic" : ""}${n ? ` (${n} matched to it)` : ""}. Choose another in the filters above.`;
 }

@@ -1,35 +1,36 @@
+"use client";
+import { useMemo } from "react";
+import type { ColumnDef } from "@tanstack/react-table";
 import type { Table } from "@/lib/dashboards/queries";
+import type { Row } from "@/lib/dashboards/csv";
+import { plural } from "@/lib/vocabulary";
+import { PagedTable } from "@/components/ui/paged-table";
+import { cellText, columnLabel } from "./column-labels";
 
-/** The exact data of a chart, as a table: the screen-reader view and what the CSV holds. */
+/**
+ * The exact data of a chart, as a table: the screen-reader view and what the CSV holds (the CSV keeps
+ * the machine column names; the screen shows words). Sorts and pages like every long list.
+ */
 export function DataTable({ table, csvHref, id }: { table: Table; csvHref: string; id: string }) {
+  const columns = useMemo<ColumnDef<Row, unknown>[]>(
+    () =>
+      table.columns.map((c) => ({
+        id: c,
+        header: columnLabel(c),
+        accessorFn: (r: Row) => r[c] ?? null,
+        cell: (x) => cellText(c, x.getValue()),
+        sortUndefined: "last",
+        meta: { numeric: table.rows.some((r) => typeof r[c] === "number") },
+      })),
+    [table],
+  );
   return (
     <details className="mt-3" open={false}>
       <summary className="cursor-pointer text-sm text-ink-2">
-        Table view: {table.title} ({table.rows.length} {table.rows.length === 1 ? "row" : "rows"})
+        Table view: {table.title} ({plural(table.rows.length, "row")})
       </summary>
-      <div className="mt-2 max-h-96 overflow-auto rounded border border-rule">
-        <table className="w-full text-xs" aria-label={table.title} id={id}>
-          <thead className="bg-paper-2 sticky top-0">
-            <tr>
-              {table.columns.map((c) => (
-                <th key={c} scope="col" className="px-2 py-1 text-left font-medium">
-                  {c}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {table.rows.map((r, i) => (
-              <tr key={i} className="border-t border-rule">
-                {table.columns.map((c) => (
-                  <td key={c} className="px-2 py-1">
-                    {r[c] === null || r[c] === undefined ? "—" : String(r[c])}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <div className="mt-2 rounded border border-rule p-2">
+        <PagedTable id={id} data={table.rows} columns={columns} label={table.title} className="text-xs" />
       </div>
       <a className="mt-2 inline-block text-sm underline" href={csvHref} download>
         Download CSV of this table

@@ -1,20 +1,9 @@
 "use client";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useQuery } from "@tanstack/react-query";
+import { ASSERTING_FRAMINGS, LABELS } from "@/lib/vocabulary";
+import { usePractices } from "@/components/practices/use-practices";
 
-type PracticeOption = { id: string; label: string; statistic: string };
 export type VenueOption = { id: string; name: string };
-
-export function usePractices() {
-  return useQuery({
-    queryKey: ["practices"],
-    queryFn: async (): Promise<{ practices: PracticeOption[]; statistics: string[] }> => {
-      const r = await fetch("/api/practices");
-      if (!r.ok) throw new Error("Could not load practices.");
-      return r.json();
-    },
-  });
-}
 
 /** Filters live in the URL so every view is a shareable link. */
 export function FiltersBar({ venues }: { venues: VenueOption[] }) {
@@ -47,11 +36,13 @@ export function FiltersBar({ venues }: { venues: VenueOption[] }) {
           className="rounded border border-rule bg-paper px-2 py-1"
         >
           <option value="">Any</option>
-          {(practices.data?.statistics ?? []).map((s) => (
-            <option key={s} value={s}>
-              {s}
-            </option>
-          ))}
+          {(practices.data?.statistics ?? [])
+            .filter((s) => (practices.data?.practices ?? []).some((p) => p.statistic === s))
+            .map((s) => (
+              <option key={s} value={s}>
+                {LABELS.statistic[s]}
+              </option>
+            ))}
         </select>
       </label>
       <label className="flex flex-col">
@@ -62,7 +53,10 @@ export function FiltersBar({ venues }: { venues: VenueOption[] }) {
           onChange={(e) => set("practice", e.target.value || null)}
           className="max-w-xs rounded border border-rule bg-paper px-2 py-1"
         >
-          <option value="">First for this statistic</option>
+          <option value="">
+            Most asserted
+            {statistic ? ` for ${LABELS.statistic[statistic as keyof typeof LABELS.statistic] ?? statistic}` : ""}
+          </option>
           {list.map((p) => (
             <option key={p.id} value={p.id}>
               {p.label}
@@ -79,8 +73,11 @@ export function FiltersBar({ venues }: { venues: VenueOption[] }) {
           className="rounded border border-rule bg-paper px-2 py-1"
         >
           <option value="">Any</option>
-          <option value="fixed">Fixed rule</option>
-          <option value="contextual">Depends on context</option>
+          {ASSERTING_FRAMINGS.map((f) => (
+            <option key={f} value={f}>
+              {LABELS.framing[f]}
+            </option>
+          ))}
         </select>
       </label>
       <label className="flex flex-col">

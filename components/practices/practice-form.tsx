@@ -1,92 +1,94 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { practiceFormSchema } from "@/lib/graph/practice-form";
-import { STATISTIC_KEYS } from "@/lib/practices";
+import { practiceFormSchema } from "@/lib/forms/practice";
+import { ASSERTING_FRAMINGS, COMPARATORS, LABELS, STATISTIC_KEYS } from "@/lib/vocabulary";
+import { Field, FormError, FormStatus, SelectField } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+import { useFormErrors } from "@/components/ui/use-form-errors";
+import { useCreatePractice } from "./use-practices";
 
 /** Curators define a practice; statements are matched to it in the background. */
 export function PracticeForm() {
   const router = useRouter();
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [status, setStatus] = useState("");
+  const form = useFormErrors(practiceFormSchema);
+  const [saved, setSaved] = useState<string>();
+  const create = useCreatePractice();
   return (
     <form
-      aria-label="Define a practice"
-      className="space-y-2 rounded border border-rule p-3"
-      onSubmit={async (e) => {
+      noValidate
+      aria-labelledby="practice-form-h"
+      className="grid gap-2 rounded border border-rule p-3"
+      onSubmit={(e) => {
         e.preventDefault();
-        const fd = Object.fromEntries(new FormData(e.currentTarget));
-        const parsed = practiceFormSchema.safeParse({
-          ...fd,
-          framing: fd.framing || null,
-          label: fd.label || undefined,
+        setSaved(undefined);
+        const fd = new FormData(e.currentTarget);
+        const text = (k: string) => String(fd.get(k) ?? "").trim();
+        const data = form.check({
+          statistic: text("statistic") || undefined,
+          comparator: text("comparator") || undefined,
+          value: text("value") === "" ? undefined : text("value"),
+          framing: text("framing") || null,
+          label: text("label") || undefined,
         });
-        if (!parsed.success) {
-          setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])));
-          return;
-        }
-        setErrors({});
-        const r = await fetch("/api/practices", {
-          method: "POST",
-          headers: { "content-type": "application/json" },
-          body: JSON.stringify(parsed.data),
+        if (!data) return;
+        create.mutate(data, {
+          onSuccess: (row) => {
+            setSaved(`Saved “${row.label}”. Statements are being matched to it.`);
+            router.refresh();
+          },
+          onError: form.fail,
         });
-        const body = await r.json().catch(() => null);
-        if (!r.ok)
-          setErrors({ [body?.error?.field ?? "form"]: body?.error?.message ?? "Could not save the practice." });
-        else {
-          setStatus(`Saved “${body.label}”. Statements are being matched to it.`);
-          router.refresh();
-        }
       }}
     >
-      <h2 className="font-medium">Define a practice</h2>
-      <label className="mr-2">
-        Statistic{" "}
-        <select name="statistic" className="rounded border border-rule bg-paper" aria-describedby="err-statistic">
-          {STATISTIC_KEYS.map((s) => (
-            <option key={s}>{s}</option>
+      <h2 id="practice-form-h" className="font-medium">
+        Define a practice
+      </h2>
+      <div className="flex flex-wrap gap-3">
+        <SelectField label="Statistic" name="statistic" defaultValue="" error={form.errors.statistic}>
+          <option value="" disabled>
+            Choose a statistic…
+          </option>
+          {STATISTIC_KEYS.filter((s) => s !== "other").map((s) => (
+            <option key={s} value={s}>
+              {LABELS.statistic[s]}
+            </option>
           ))}
-        </select>
-      </label>
-      <label className="mr-2">
-        Comparator{" "}
-        <select name="comparator" className="rounded border border-rule bg-paper" aria-describedby="err-comparator">
-          {[">=", ">", "<=", "<", "="].map((c) => (
-            <option key={c}>{c}</option>
+        </SelectField>
+        <SelectField label="Comparator" name="comparator" defaultValue="" error={form.errors.comparator}>
+          <option value="" disabled>
+            Choose…
+          </option>
+          {COMPARATORS.map((c) => (
+            <option key={c} value={c}>
+              {LABELS.comparator[c]} ({LABELS.comparatorWords[c]})
+            </option>
           ))}
-        </select>
-      </label>
-      <label className="mr-2">
-        Value{" "}
-        <input
-          name="value"
-          inputMode="decimal"
-          className="w-20 rounded border border-rule bg-paper"
-          aria-describedby="err-value"
-        />
-      </label>
-      <label className="mr-2">
-        Framing{" "}
-        <select name="framing" className="rounded border border-rule bg-paper">
-          <option value="">any</option>
-          <option value="fixed">fixed rule</option>
-          <option value="contextual">depends on context</option>
-        </select>
-      </label>
-      <label className="block">
-        Label (optional){" "}
-        <input name="label" className="w-96 rounded border border-rule bg-paper" aria-describedby="err-label" />
-      </label>
-      <div aria-live="polite" className="text-sm">
-        {Object.entries(errors).map(([k, m]) => (
-          <p key={k} id={`err-${k}`} className="text-accent">
-            {m}
-          </p>
-        ))}
-        {status && <p>{status}</p>}
+        </SelectField>
+        <Field label="Value" name="value" inputMode="decimal" className="w-24" error={form.errors.value} />
+        <SelectField label="Framing" name="framing" defaultValue="" error={form.errors.framing}>
+          <option value="">Any framing</option>
+          {ASSERTING_FRAMINGS.map((f) => (
+            <option key={f} value={f}>
+              {LABELS.framing[f]}
+            </option>
+          ))}
+        </SelectField>
       </div>
-      <button className="rounded bg-ink px-3 py-1.5 text-paper">Save practice</button>
+      <Field
+        label="Label (optional)"
+        name="label"
+        className="max-w-xl"
+        hint="Left empty, the label is written from the rule, e.g. “Cronbach's α ≥ .70, as a fixed rule”."
+        error={form.errors.label}
+      />
+      <FormError message={form.errors.form} />
+      <FormStatus message={saved} />
+      <div>
+        <Button type="submit" disabled={create.isPending}>
+          Save practice
+        </Button>
+      </div>
     </form>
   );
 }

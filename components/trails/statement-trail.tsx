@@ -1,20 +1,11 @@
 "use client";
-import { useQuery } from "@tanstack/react-query";
 import { TrailGraph } from "./trail-graph";
-import type { TrailGraphView } from "@/lib/dashboards/trail-view";
+import { useStatementTrail } from "./use-trail";
 import { DataTable } from "@/components/dashboards/data-table";
 import { toCsv } from "@/lib/dashboards/csv";
 
 export function StatementTrail({ statementId, practiceId }: { statementId: string; practiceId?: string }) {
-  const q = useQuery({
-    queryKey: ["trail", statementId, practiceId],
-    queryFn: async (): Promise<TrailGraphView> => {
-      const r = await fetch(`/api/trails/${statementId}${practiceId ? `?practice=${practiceId}` : ""}`);
-      const body = await r.json();
-      if (!r.ok) throw new Error(body?.error?.message ?? "The trail could not be loaded.");
-      return body;
-    },
-  });
+  const q = useStatementTrail(statementId, practiceId);
   if (q.isPending) return <p role="status">Following the citations…</p>;
   if (q.isError)
     return (

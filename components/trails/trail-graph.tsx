@@ -1,28 +1,39 @@
 "use client";
 import "@xyflow/react/dist/style.css";
-import { useMemo } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { useRouter } from "next/navigation";
-import { ReactFlow, Background, Controls, MarkerType, type Edge, type Node } from "@xyflow/react";
+import {
+  ReactFlow,
+  Background,
+  Controls,
+  MarkerType,
+  type Edge,
+  type Node,
+  type ReactFlowInstance,
+} from "@xyflow/react";
 import type { GraphEdge, GraphNode } from "@/lib/dashboards/trail-view";
+import { LABELS, labelOf } from "@/lib/vocabulary";
+import { NODE_W, viewportFor, type Span } from "@/lib/trails/graph-viewport";
 
 export type TrailGraphData = { nodes: GraphNode[]; edges: GraphEdge[] };
 
-const END_LABEL: Record<string, string> = {
-  methods_source: "methods source",
-  empirical_precedent: "empirical precedent",
-  unclassified: "not yet typed",
-  unresolved: "unresolved",
-  no_citation: "cites nothing",
-};
+// Layout: one column per year present, one row per node in that column.
+const COL = 260;
+const ROW = 96;
+const HEIGHT = 560;
 
 /**
  * Articles and works laid out by year (x) so a chain reads left to right in time; each edge carries
- * the citation's locator. Clicking a statement opens the sentence in its article; a work, its page.
- * Every node is also a link in the list below the graph, for keyboards and screen readers.
+ * the citation's locator. It opens on the most recent decade at a readable size; "Years shown" widens
+ * it. Clicking a statement opens the sentence in its article; a work, its page. Every node is also a
+ * link in the list below the graph, for keyboards and screen readers.
  */
 export function TrailGraph({ data }: { data: TrailGraphData }) {
   const router = useRouter();
-  const { nodes, edges } = useMemo(() => {
+  const box = useRef<HTMLDivElement>(null);
+  const flow = useRef<ReactFlowInstance | null>(null);
+  const [span, setSpan] = useState<Span>("decade");
+  const { nodes, edges, placed, range } = useMemo(() => {
     const years = [...new Set(data.nodes.map((n) => n.year ?? 0))].sort((a, b) => a - b);
     const col = new Map(years.map((y, i) => [y, i]));
     const rowInCol = new Map<number, number>();
@@ -34,23 +45,22 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
         n.kind === "statement"
           ? "claim"
           : n.kind === "work"
-            ? n.workType === "methods_source"
-              ? "methods source"
-              : (n.workType ?? "work")
-            : "unresolved";
+            ? labelOf("workType", n.workType ?? "unknown").toLowerCase()
+            : "unresolved reference";
       return {
         id: n.id,
-        position: { x: c * 240, y: r * 90 },
+        position: { x: c * COL, y: r * ROW },
         data: {
-          label: `${n.year ?? "n.d."} · ${n.label} [${kind}]${n.end ? ` → ${END_LABEL[n.end] ?? n.end}` : ""}`,
+          label: `${n.year ?? "n.d."} · ${n.label} [${kind}]${n.end ? ` → ${labelOf("trailEnd", n.end).toLowerCase()}` : ""}`,
           href: n.href,
         },
         style: {
           background: "var(--paper)",
           color: "var(--ink)",
           border: `${n.kind === "work" && n.workType === "methods_source" ? 3 : 1}px ${n.kind === "unresolved" ? "dashed" : "solid"} var(--ink-2)`,
-          fontSize: 11,
-          width: 200,
+          fontSize: 12,
+          lineHeight: 1.3,
+          width: NODE_W,
           cursor: n.href ? "pointer" : "default",
         },
       };
@@ -62,30 +72,87 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
       label: e.kind === "cites" ? (e.locator ?? "no page") + (e.secondary ? " (as cited in)" : "") : "asserted in",
       style: { stroke: "var(--ink-2)", strokeDasharray: e.kind === "asserted_in" ? "4 3" : undefined },
       markerEnd: { type: MarkerType.ArrowClosed },
-      labelStyle: { fontSize: 10 },
+      labelStyle: { fontSize: 11 },
     }));
-    return { nodes, edges };
+    const placed = nodes.map((n, i) => ({ position: n.position, year: data.nodes[i].year }));
+    const known = data.nodes.map((n) => n.year).filter((y): y is number => y !== null);
+    const range = known.length ? { first: Math.min(...known), last: Math.max(...known) } : null;
+    return { nodes, edges, placed, range };
   }, [data]);
+
+  const show = useCallback(
+    (s: Span, animate: boolean) => {
+      const el = box.current;
+      if (!flow.current || !el || placed.length === 0) return;
+      const v = viewportFor(placed, s, { width: el.clientWidth, height: el.clientHeight });
+      flow.current.setViewport(v, animate ? { duration: 250 } : undefined);
+    },
+    [placed],
+  );
+  // New data (a filter changed) opens on the chosen span again.
+  useEffect(() => show(span, false), [show, span]);
+
   if (data.nodes.length === 0) return <p className="text-ink-2">No trails match these filters.</p>;
+  const spanText = (s: Span) => {
+    if (!range) return "All years";
+    if (s === "all") return `All years (${range.first}–${range.last})`;
+    const n = s === "decade" ? 10 : 20;
+    return `Last ${n} years (${Math.max(range.first, range.last - n + 1)}–${range.last})`;
+  };
+  const spans: Span[] = !range
+    ? ["all"]
+    : range.last - range.first < 10
+      ? ["all"]
+      : range.last - range.first < 20
+        ? ["decade", "all"]
+        : ["decade", "two-decades", "all"];
   return (
     <div>
-      <div style={{ height: 520 }} className="rounded border border-rule" aria-hidden="true">
-        {/* A practice over decades is far wider than the box: fitting it all would shrink the labels
-            past reading, so the first view stops at a legible zoom; drag to pan, the controls zoom out. */}
+      <div className="mb-2 flex flex-wrap items-center gap-3 text-sm">
+        {spans.length > 1 && (
+          <label className="inline-flex items-center gap-2">
+            <span className="font-medium">Years shown</span>
+            <select
+              value={span}
+              onChange={(e) => setSpan(e.target.value as Span)}
+              className="rounded border border-rule bg-paper px-2 py-1"
+            >
+              {spans.map((s) => (
+                <option key={s} value={s}>
+                  {spanText(s)}
+                </option>
+              ))}
+            </select>
+          </label>
+        )}
+        {span !== "all" && spans.length > 1 && (
+          <button type="button" className="underline" onClick={() => setSpan("all")}>
+            Show all years
+          </button>
+        )}
+        <span className="text-ink-2">
+          Older years are to the left: drag to pan, use + and − to zoom. {LABELS.trailEnd.methods_source}: thick border;
+          unresolved reference: dashed.
+        </span>
+      </div>
+      <div style={{ height: HEIGHT }} className="rounded border border-rule" aria-hidden="true" ref={box}>
         <ReactFlow
           nodes={nodes}
           edges={edges}
-          fitView
-          fitViewOptions={{ minZoom: 0.6 }}
           minZoom={0.1}
+          maxZoom={2}
           nodesDraggable={false}
+          onInit={(inst) => {
+            flow.current = inst as unknown as ReactFlowInstance;
+            show(span, false);
+          }}
           onNodeClick={(_, n) => {
             const h = (n.data as { href?: string }).href;
             if (h) router.push(h);
           }}
         >
           <Background />
-          <Controls />
+          <Controls showInteractive={false} />
         </ReactFlow>
       </div>
       <ul className="mt-3 space-y-1 text-sm" aria-label="Trail steps">
@@ -107,6 +174,7 @@ export function TrailGraph({ data }: { data: TrailGraphData }) {
                 </a>
               </>
             )}
+            {n.end && <span className="text-ink-2"> · {labelOf("trailEnd", n.end)}</span>}
             {n.sentence && <span className="evidence block text-ink-2">“{n.sentence}”</span>}
           </li>
         ))}

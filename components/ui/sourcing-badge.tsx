@@ -14,7 +14,7 @@ export function SourcingBadge({ sourcing }: { sourcing: Sourcing }) {
         {s.pattern === "dots" && <circle cx="5" cy="5" r="2" fill={s.color} />}
         {s.pattern === "cross" && <path d="M2 2 L8 8 M8 2 L2 8" stroke={s.color} />}
       </svg>
-      {s.short}
+      {s.label}
     </span>
   );
 }

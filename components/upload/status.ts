@@ -1,11 +1,4 @@
 import type { ArticleStatus } from "@/lib/vocabulary";
 
-export const STATUS_LABEL: Record<ArticleStatus, string> = {
-  uploaded: "Uploaded",
-  queued: "Queued",
-  reading: "Reading",
-  mining: "Mining",
-  done: "Done",
-  failed: "Failed",
-};
-export const isFinished = (s: string) => s === "done" || s === "failed";
+/** Mining has ended, one way or the other: polling can stop. */
+export const isFinished = (s: ArticleStatus | string) => s === "done" || s === "failed";

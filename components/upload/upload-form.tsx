@@ -1,9 +1,9 @@
 "use client";
 import Link from "next/link";
 import { useCallback, useId, useRef, useState } from "react";
-import { useQuery } from "@tanstack/react-query";
-import { STATUS_LABEL, isFinished } from "./status";
-import type { ArticleStatus } from "@/lib/vocabulary";
+import { fetchJson } from "@/lib/http/fetch-json";
+import { LABELS, plural } from "@/lib/vocabulary";
+import { useUploadBatch } from "./use-upload-batch";
 
 type Row = {
   key: string;
@@ -14,23 +14,9 @@ type Row = {
   duplicate?: boolean;
   error?: string;
 };
-type ServerFile = {
-  id: string;
-  status: ArticleStatus;
-  failure_code: string | null;
-  failure_message: string | null;
-  title: string | null;
-};
 
 const MAX_MB = 50;
 const PARALLEL = 2;
-
-async function json<T>(r: Response): Promise<T> {
-  const body = await r.json().catch(() => ({ error: { message: `The server answered ${r.status}.` } }));
-  if (!r.ok)
-    throw new Error((body as { error?: { message?: string } }).error?.message ?? `The server answered ${r.status}.`);
-  return body as T;
-}
 
 export function UploadForm() {
   const [rows, setRows] = useState<Row[]>([]);
@@ -58,19 +44,8 @@ export function UploadForm() {
   }, []);
 
   const articleIds = rows.map((r) => r.articleId).filter(Boolean) as string[];
-  const status = useQuery({
-    queryKey: ["upload-batch", batchId, articleIds.join(",")],
-    enabled: !!batchId && articleIds.length > 0,
-    queryFn: async () =>
-      json<{ files: ServerFile[] }>(await fetch(`/api/uploads/${batchId}?ids=${articleIds.join(",")}`)),
-    // Live progress by polling: once a second while anything is unfinished, then it stops.
-    refetchInterval: (q) => {
-      const files = q.state.data?.files ?? [];
-      const pending = rows.some((r) => r.phase === "waiting" || r.phase === "sending");
-      return pending || files.length < articleIds.length || files.some((f) => !isFinished(f.status)) ? 1000 : false;
-    },
-    staleTime: 0,
-  });
+  const pending = rows.some((r) => r.phase === "waiting" || r.phase === "sending");
+  const status = useUploadBatch(batchId, articleIds, pending);
   const byId = new Map((status.data?.files ?? []).map((f) => [f.id, f]));
 
   const update = (key: string, patch: Partial<Row>) =>
@@ -87,20 +62,14 @@ export function UploadForm() {
     setFormError(null);
     try {
       const metadata = meta ? { filename: meta.name, text: await meta.text() } : null;
-      const b = await json<{
+      const b = await fetchJson<{
         batchId: string;
         metadata: { format: string; entries: number; warnings: string[] } | null;
-      }>(
-        await fetch("/api/uploads", {
-          method: "POST",
-          headers: { "content-type": "application/json" },
-          body: JSON.stringify({ metadata }),
-        }),
-      );
+      }>("/api/uploads", { method: "POST", json: { metadata } });
       setBatchId(b.batchId);
       if (b.metadata)
         setMetaNote(
-          `${b.metadata.entries} entries read from the ${b.metadata.format.toUpperCase()} file.${b.metadata.warnings.length ? " " + b.metadata.warnings.join(" ") : ""}`,
+          `${plural(b.metadata.entries, "entry", "entries")} read from the ${b.metadata.format.toUpperCase()} file.${b.metadata.warnings.length ? " " + b.metadata.warnings.join(" ") : ""}`,
         );
       const queue = [...waiting];
       const worker = async () => {
@@ -112,12 +81,10 @@ export function UploadForm() {
           }
           update(r.key, { phase: "sending" });
           try {
-            const res = await fetch(`/api/uploads/${b.batchId}/files?name=${encodeURIComponent(file.name)}`, {
-              method: "POST",
-              headers: { "content-type": "application/octet-stream" },
-              body: file,
-            });
-            const out = await json<{ articleId: string; duplicate: boolean }>(res);
+            const out = await fetchJson<{ articleId: string; duplicate: boolean }>(
+              `/api/uploads/${b.batchId}/files?name=${encodeURIComponent(file.name)}`,
+              { method: "POST", headers: { "content-type": "application/octet-stream" }, body: file },
+            );
             update(r.key, { phase: "sent", articleId: out.articleId, duplicate: out.duplicate });
           } catch (err) {
             update(r.key, { phase: "refused", error: (err as Error).message });
@@ -132,7 +99,7 @@ export function UploadForm() {
     }
   }
 
-  const stateOf = (r: Row): { label: string; tone: "wait" | "ok" | "bad"; reason?: string } => {
+  const stateOf = (r: Row): { label: string; tone: "wait" | "ok" | "bad"; reason?: string; mined?: boolean } => {
     if (r.phase === "refused") return { label: "Refused", tone: "bad", reason: r.error };
     if (r.phase === "waiting") return { label: "Ready to upload", tone: "wait" };
     if (r.phase === "sending") return { label: "Uploading", tone: "wait" };
@@ -141,12 +108,13 @@ export function UploadForm() {
     if (f.status === "failed")
       return { label: "Failed", tone: "bad", reason: f.failure_message ?? "No reason recorded." };
     return {
-      label: STATUS_LABEL[f.status] + (r.duplicate ? " (duplicate: already in the corpus)" : ""),
+      label: LABELS.articleStatus[f.status] + (r.duplicate ? " (duplicate: already in the corpus)" : ""),
       tone: f.status === "done" ? "ok" : "wait",
+      mined: f.status === "done",
     };
   };
   const states = rows.map(stateOf);
-  const done = states.filter((s) => s.label.startsWith("Done")).length;
+  const done = states.filter((s) => s.mined).length;
   const failed = states.filter((s) => s.tone === "bad").length;
   const finished = done + failed;
 
@@ -223,13 +191,13 @@ export function UploadForm() {
 
       <div className="flex items-center gap-3">
         <button type="submit" disabled={busy} className="rounded bg-ink px-4 py-2 text-paper disabled:opacity-60">
-          {busy ? "Uploading…" : `Upload ${rows.filter((r) => r.phase === "waiting").length || ""} file(s)`}
+          {busy ? "Uploading…" : uploadLabel(rows.filter((r) => r.phase === "waiting").length)}
         </button>
         {rows.length > 0 && (
           <div className="flex flex-1 items-center gap-3">
             <progress className="h-2 flex-1" max={rows.length} value={finished} aria-label="Batch progress" />
             <span className="text-sm tabular-nums" aria-live="polite" data-testid="batch-counts">
-              {finished} of {rows.length} finished · {done} done · {failed} failed
+              {finished} of {rows.length} finished · {done} mined · {failed} failed
             </span>
           </div>
         )}
@@ -250,7 +218,7 @@ export function UploadForm() {
               return (
                 <tr key={r.key} className="border-b border-rule align-top" data-testid="upload-row">
                   <td className="py-1.5 pr-3">
-                    {r.articleId && s.label.startsWith("Done") ? (
+                    {r.articleId && s.mined ? (
                       <Link className="underline" href={`/articles/${r.articleId}`}>
                         {r.name}
                       </Link>
@@ -279,3 +247,5 @@ export function UploadForm() {
     </form>
   );
 }
+
+const uploadLabel = (n: number) => (n === 0 ? "Upload files" : `Upload ${plural(n, "file")}`);

@@ -31,38 +31,37 @@ export interface PracticeRef {
   key: string;
   label: string;
   statistic: string;
+  /** Statements matched to the practice (the whole corpus, before filters). */
+  matched?: number;
 }
 
 /**
- * The practice a dashboard shows: the one asked for; else, for a statistic filter, that statistic's
- * first practice; else the first seeded practice. A practice that contradicts the statistic filter
- * gives way to the statistic, so changing the statistic in the UI never shows an empty mismatch.
+ * The practice a dashboard shows: the one asked for; else the most asserted practice (most matched
+ * statements; ties: seeded first, then by key), among the statistic's practices under a statistic
+ * filter. A practice that contradicts the statistic filter gives way to the statistic, so changing
+ * the statistic in the UI never shows an empty mismatch.
  */
 export async function pickPractice(db: DB, f: Filters): Promise<PracticeRef | null> {
-  if (f.practice) {
-    const p = await db
-      .selectFrom("practices")
-      .select(["id", "key", "label", "statistic"])
-      .where("id", "=", f.practice)
-      .executeTakeFirst();
-    if (p && (!f.statistic || p.statistic === f.statistic)) return p;
-  }
-  let q = db.selectFrom("practices").select(["id", "key", "label", "statistic"]);
-  if (f.statistic) q = q.where("statistic", "=", f.statistic);
-  return (await q.orderBy("is_seeded", "desc").orderBy("key").limit(1).executeTakeFirst()) ?? null;
+  const { rows } = await sql<PracticeRef>`with ${practiceCte(f)} select * from p`.execute(db);
+  return rows[0] ?? null;
 }
 
+const MATCHED = sql`(select count(*)::int from statement_practices sp where sp.practice_id = practices.id)`;
+
 /**
- * pickPractice as a CTE named `p` (id, key, label, statistic; at most one row), so a chart fetches
- * its practice and its data in one statement (one round trip) instead of two.
+ * The chosen practice as a CTE named `p` (id, key, label, statistic, matched; at most one row), so a
+ * chart fetches its practice and its data in one statement (one round trip) instead of two. The
+ * count per practice reads the statement_practices_practice index.
  */
 export function practiceCte(f: Filters) {
   const stat = f.statistic ? sql`and statistic = ${f.statistic}` : sql``;
   const asked = f.practice
-    ? sql`(select id, key, label, statistic, 0 as pri from practices where id = ${f.practice}::uuid ${stat}) union all`
+    ? sql`(select id, key, label, statistic, ${MATCHED} as matched, 0 as pri from practices
+        where id = ${f.practice}::uuid ${stat}) union all`
     : sql``;
-  return sql`p as (select id, key, label, statistic from (${asked}
-    (select id, key, label, statistic, 1 as pri from practices where true ${stat} order by is_seeded desc, key limit 1)) x
+  return sql`p as (select id, key, label, statistic, matched from (${asked}
+    (select id, key, label, statistic, ${MATCHED} as matched, 1 as pri from practices where true ${stat}
+      order by ${MATCHED} desc, is_seeded desc, key limit 1)) x
     order by pri limit 1)`;
 }
 

@@ -2,7 +2,7 @@ import type { DB } from "@/db";
 import { ValidationError } from "@/lib/errors";
 import { toCsv, type Row } from "./csv";
 import { driftView } from "./drift";
-import type { Filters } from "./filters";
+import type { Filters, PracticeRef } from "./filters";
 import { practiceOverTime, trailEnds, venueComparison, type Table } from "./queries";
 import { practiceTrailView } from "./trail-view";
 
@@ -13,7 +13,7 @@ export const isDashboardName = (s: string | undefined): s is DashboardName =>
   (DASHBOARD_NAMES as readonly string[]).includes(s ?? "");
 
 export interface DashboardPayload {
-  practice: { id: string; key: string; label: string; statistic: string } | null;
+  practice: PracticeRef | null;
   tables: Record<string, Table>;
   notes: string[];
   graph?: { nodes: unknown[]; edges: unknown[] };

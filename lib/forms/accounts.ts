@@ -64,12 +64,4 @@ export const venueSchema = z.object({
 
 export const venuePatchSchema = venueSchema.partial();
 
-/** Turn a zod error into one message per field, for forms. */
-export function fieldErrors(error: z.ZodError): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join(".") || "form";
-    out[key] ??= issue.message;
-  }
-  return out;
-}
+export { fieldErrors } from "./errors";

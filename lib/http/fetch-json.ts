@@ -31,7 +31,10 @@ export async function fetchJson<T>(input: string, init?: RequestInit & { json?: 
   return data as T;
 }
 
-/** A failed request as form errors: on the field the server named, else on the whole form. */
+/**
+ * A failed request as form errors: on the field the server named (its top-level name, so `authors.2`
+ * lands on the authors box), else on the whole form. Every form maps server errors through this.
+ */
 export function formErrorsOf(e: Error): Record<string, string> {
-  return e instanceof ApiError && e.field ? { [e.field]: e.message } : { form: e.message };
+  return e instanceof ApiError && e.field ? { [e.field.split(".")[0]]: e.message } : { form: e.message };
 }

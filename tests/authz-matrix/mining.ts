@@ -20,6 +20,12 @@ export const miningRows: MatrixRow[] = [
   { file: "app/api/articles/route.ts", path: "/api/articles", method: "GET", allow: ANY_SIGNED_IN },
   { file: "app/api/articles/[id]/route.ts", path: `/api/articles/${SAMPLE_ID}`, method: "GET", allow: ANY_SIGNED_IN },
   {
+    file: "app/api/articles/[id]/status/route.ts",
+    path: `/api/articles/${SAMPLE_ID}/status`,
+    method: "GET",
+    allow: ANY_SIGNED_IN,
+  },
+  {
     file: "app/api/articles/[id]/route.ts",
     path: `/api/articles/${SAMPLE_ID}`,
     method: "PATCH",

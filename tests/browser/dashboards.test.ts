@@ -94,3 +94,89 @@ describe("dashboards for a reader", () => {
     expect(sentence).toMatch(/alpha|α/i);
   });
 });
+
+// Screens of issue 8, on the same invented fixture: words instead of keys, no verdict assumed, plurals.
+describe("screens in words", () => {
+  it("opens a dashboard without a chosen practice on the most asserted one and says so", async () => {
+    await b.page.goto(`${APP_URL}/dashboards/practice-over-time?${only}`);
+    const why = b.page.getByTestId("practice-shown");
+    await why.waitFor();
+    expect(await why.textContent()).toMatch(/most asserted practice \(\d[\d,]* statements? matched to it\)/);
+    // The filter names the default the same way instead of "first for this statistic".
+    expect(await b.page.getByLabel("Practice").locator("option").first().textContent()).toBe("Most asserted");
+  });
+
+  it("shows a disputed cut-off with its own badge in words and an 'other' statistic by its written name", async () => {
+    const st = await db
+      .insertInto("statements")
+      .values({
+        article_id: ids.articles.M,
+        ordinal: 99,
+        page: 4,
+        section: "methods",
+        sentence: "An expected cell count of at least 5 is often demanded, but this rule is far too strict (M).",
+        kind: "threshold",
+        statistic: "other",
+        statistic_label: "expected cell count",
+        comparator: ">=",
+        value: 5,
+        framing: "disputed",
+        procedure_key: null,
+        sourcing: "unsourced",
+        fingerprint: "M-disputed-99",
+      })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    try {
+      await b.page.goto(`${APP_URL}/articles/${ids.articles.M}`);
+      const item = b.page.locator(`[id="statement-${st.id}"]`);
+      await item.waitFor();
+      const text = (await item.textContent()) ?? "";
+      expect(text).toContain("Disputed: argued against");
+      expect(text).toContain("expected cell count");
+      expect(text).toContain("≥ 5");
+      expect(text).not.toContain("No source"); // a disputed cut-off is not counted, so no sourcing badge
+      // The other statements of the article speak words, not keys.
+      const page = (await b.page.locator("main").textContent()) ?? "";
+      for (const key of ["cronbach_alpha", ">=", "cited_no_locator", "threshold"]) expect(page).not.toContain(key);
+      expect(page).toContain("Cronbach's α");
+    } finally {
+      await db.deleteFrom("statements").where("id", "=", st.id).execute();
+    }
+  });
+
+  it("asks a curator for a verdict instead of assuming one, and counts citing articles in good English", async () => {
+    const book = await db
+      .selectFrom("works")
+      .select("id")
+      .where("title", "ilike", "Psychometric foundations for invented scales%")
+      .where("merged_into", "is", null)
+      .executeTakeFirstOrThrow();
+    const curator = await launchBrowser();
+    try {
+      await signInAs(curator.page, "curator");
+      await curator.page.goto(`${APP_URL}/works/${book.id}`);
+      const form = curator.page.getByRole("form", { name: "Record what this work says" });
+      await form.waitFor();
+      expect(await form.locator('input[name="verdict"]:checked').count()).toBe(0);
+      await form.getByRole("button", { name: "Save source check" }).click();
+      const group = form.getByRole("group", { name: "What the work says" });
+      await form.getByText("Choose what the work says.").waitFor();
+      const describedBy = (await group.getAttribute("aria-describedby")) ?? "";
+      const errIds = describedBy.split(" ").filter(Boolean);
+      const described = await Promise.all(errIds.map((id) => curator.page.locator(`[id="${id}"]`).textContent()));
+      expect(described).toContain("Choose what the work says.");
+      expect(await form.getByText("Choose a practice.").count()).toBe(1);
+      // Hand count (fixture): the invented book is cited once by M and once by A2.
+      expect(await curator.page.getByRole("heading", { name: /^Cited by/ }).textContent()).toBe(
+        "Cited by 2 articles (2 references)",
+      );
+      const table = curator.page.getByRole("table", { name: "Articles citing this work" });
+      expect(await table.locator("tbody tr").count()).toBe(2);
+      await table.getByRole("button", { name: /Year/ }).click();
+      expect(await table.locator("th", { hasText: "Year" }).getAttribute("aria-sort")).toMatch(/ascending|descending/);
+    } finally {
+      await curator.close();
+    }
+  });
+});

@@ -129,7 +129,7 @@ describe("the Content-Security-Policy in the browser", () => {
       .setInputFiles({ name: "csp-check.pdf", mimeType: "application/pdf", buffer: pdf });
     await page.getByRole("button", { name: /^Upload/ }).click();
     await page.waitForFunction(
-      () => /^(Done|Failed|Refused)/.test(document.querySelector('[data-testid="upload-status"]')?.textContent ?? ""),
+      () => /^(Mined|Failed|Refused)/.test(document.querySelector('[data-testid="upload-status"]')?.textContent ?? ""),
       null,
       { timeout: 90_000 },
     );

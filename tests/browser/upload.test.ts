@@ -1,5 +1,5 @@
 /**
- * A curator uploads a PDF through the real upload page, watches it reach "Done" without reloading,
+ * A curator uploads a PDF through the real upload page, watches it reach "Mined" without reloading,
  * and then reads its statements. The built app, its worker and a test database (tests/setup/app-global.ts).
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -15,7 +15,7 @@ afterAll(async () => {
 });
 
 describe("upload through the browser", () => {
-  it("uploads a PDF, shows live progress to Done, then its statements", async () => {
+  it("uploads a PDF, shows live progress to Mined, then its statements", async () => {
     const { page } = browser;
     await signInAs(page, "curator");
     await page.goto(`${APP_URL}/upload`);
@@ -30,12 +30,12 @@ describe("upload through the browser", () => {
     const status = page.getByTestId("upload-status").first();
     // Waits on the page's own polling; the assertion fails if it never gets there.
     await page.waitForFunction(
-      () => /^(Done|Failed|Refused)/.test(document.querySelector('[data-testid="upload-status"]')?.textContent ?? ""),
+      () => /^(Mined|Failed|Refused)/.test(document.querySelector('[data-testid="upload-status"]')?.textContent ?? ""),
       null,
       { timeout: 90_000 },
     );
-    expect(await status.textContent()).toMatch(/^Done/);
-    expect(await page.getByTestId("batch-counts").textContent()).toContain("1 of 1 finished · 1 done · 0 failed");
+    expect(await status.textContent()).toMatch(/^Mined/);
+    expect(await page.getByTestId("batch-counts").textContent()).toContain("1 of 1 finished · 1 mined · 0 failed");
     expect(await page.evaluate(() => (window as unknown as { __noReload?: number }).__noReload)).toBe(1);
 
     await page.getByRole("link", { name: "ward-climate.pdf" }).click();
@@ -46,6 +46,6 @@ describe("upload through the browser", () => {
     // The matched value and the citation are highlighted in the evidence face.
     expect(await page.locator("p.evidence mark.value").first().textContent()).toBe(".70");
     expect(await page.locator("p.evidence mark.cite").first().textContent()).toContain("Brandtner & Oyelaran, 2003");
-    expect(await page.getByTestId("article-status").textContent()).toBe("Done");
+    expect(await page.getByTestId("article-status").textContent()).toBe("Mined");
   });
 });

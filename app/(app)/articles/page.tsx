@@ -5,7 +5,7 @@ import { getDb } from "@/db";
 import { ArticleFilters, ARTICLE_STATUSES, listArticles } from "@/lib/corpus/articles";
 import { listVenues } from "@/db/queries/venues";
 import { EmptyState } from "@/components/ui/empty-state";
-import { STATUS_LABEL } from "@/components/upload/status";
+import { LABELS } from "@/lib/vocabulary";
 
 export const metadata = { title: "Articles" };
 
@@ -41,7 +41,7 @@ export default async function ArticlesPage({
             <option value="">Any</option>
             {ARTICLE_STATUSES.map((s) => (
               <option key={s} value={s}>
-                {STATUS_LABEL[s]}
+                {LABELS.articleStatus[s]}
               </option>
             ))}
           </select>
@@ -121,7 +121,7 @@ export default async function ArticlesPage({
                 <td className="py-1.5 pr-3">{a.venue ?? "—"}</td>
                 <td className="py-1.5 pr-3 tabular-nums">{a.year ?? "—"}</td>
                 <td className="py-1.5 pr-3">
-                  {STATUS_LABEL[a.status]}
+                  {LABELS.articleStatus[a.status]}
                   {a.status === "failed" && a.failure_message && (
                     <span className="block text-xs text-ink-2">{a.failure_message}</span>
                   )}

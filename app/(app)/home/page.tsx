@@ -4,6 +4,7 @@ import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { corpusCounts } from "@/db/queries/articles";
 import { listVenues } from "@/db/queries/venues";
+import { plural } from "@/lib/vocabulary";
 import { EmptyState } from "@/components/ui/empty-state";
 
 export const metadata = { title: "Home" };
@@ -69,7 +70,7 @@ export default async function HomePage() {
             {Number(counts.failed) > 0 && can(actor, "corpus:curate") && (
               <li>
                 <Link className="underline" href="/articles?status=failed">
-                  {Number(counts.failed)} articles failed to mine: see why
+                  {plural(Number(counts.failed), "article")} failed to mine: see why
                 </Link>
               </li>
             )}

@@ -1,56 +1,73 @@
 import Link from "next/link";
 import { requirePage } from "@/lib/server/session";
 import { getDb } from "@/db";
-import { listWorks } from "@/lib/graph/work-detail";
+import { listWorksPage, worksCursorParam, worksCursorText } from "@/db/queries/works-list";
+import { plural } from "@/lib/vocabulary";
 import { EmptyState } from "@/components/ui/empty-state";
+import { WorksTable } from "@/components/works/works-table";
 
-export default async function WorksPage({ searchParams }: { searchParams: Promise<{ q?: string }> }) {
+export const metadata = { title: "Works" };
+
+const PAGE = 50;
+
+export default async function WorksPage({ searchParams }: { searchParams: Promise<{ q?: string; after?: string }> }) {
   await requirePage("corpus:read");
-  const { q } = await searchParams;
-  const works = await listWorks(getDb(), { q: q?.slice(0, 200) });
+  const { q: rawQ, after: rawAfter } = await searchParams;
+  const q = rawQ?.slice(0, 200);
+  const after = worksCursorParam.safeParse(rawAfter ?? "");
+  const { rows, next } = await listWorksPage(getDb(), {
+    q,
+    after: after.success ? after.data : undefined,
+    limit: PAGE,
+  });
+  const link = (extra: Record<string, string>) =>
+    `/works?${new URLSearchParams({ ...(q ? { q } : {}), ...extra }).toString()}`;
+  const firstPage = !after.success;
   return (
-    <div className="space-y-4">
+    <div className="grid gap-4">
       <h1 className="font-serif text-3xl font-semibold">Works</h1>
-      <form>
-        <label>
-          Search title or first author{" "}
-          <input name="q" defaultValue={q} className="rounded border border-rule bg-paper px-2" />
-        </label>{" "}
-        <button className="rounded border border-ink px-2">Search</button>
+      <form role="search" className="flex flex-wrap items-end gap-2">
+        <label className="grid gap-1 text-sm">
+          <span>Search title or first author</span>
+          <input name="q" defaultValue={q} className="rounded border border-rule bg-paper px-2 py-1" />
+        </label>
+        <button className="rounded border border-ink px-3 py-1">Search</button>
+        {q && (
+          <Link href="/works" className="text-sm underline">
+            Clear the search
+          </Link>
+        )}
       </form>
-      {works.length === 0 ? (
-        <EmptyState title="No works yet" action={{ href: "/dashboards", label: "Open the dashboards" }}>
-          Works appear once mined articles&apos; references are resolved.
-        </EmptyState>
+      {rows.length === 0 ? (
+        q ? (
+          <EmptyState title="No work matches this search">
+            Try part of the title or the first author&apos;s surname.
+          </EmptyState>
+        ) : (
+          <EmptyState title="No works yet" action={{ href: "/dashboards", label: "Open the dashboards" }}>
+            Works appear once mined articles&apos; references are resolved.
+          </EmptyState>
+        )
       ) : (
-        <table className="w-full text-sm">
-          <thead>
-            <tr>
-              <th scope="col" className="text-left">
-                Work
-              </th>
-              <th scope="col">Year</th>
-              <th scope="col">Type</th>
-              <th scope="col">In corpus</th>
-              <th scope="col">References</th>
-            </tr>
-          </thead>
-          <tbody>
-            {works.map((w) => (
-              <tr key={w.id} className="border-t border-rule">
-                <td>
-                  <Link className="underline" href={`/works/${w.id}`}>
-                    {w.title ?? w.first_author ?? "Untitled work"}
-                  </Link>
-                </td>
-                <td>{w.year ?? "n.d."}</td>
-                <td>{w.work_type.replace("_", " ")}</td>
-                <td>{w.in_corpus ? "yes" : "no"}</td>
-                <td>{w.references}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <>
+          <p className="text-sm text-ink-2">Most cited first.</p>
+          <WorksTable
+            rows={rows}
+            summary={`${firstPage ? "First" : "This"} page: ${plural(rows.length, "work")}${next ? ", more on the next page" : ""}.`}
+          />
+          <nav className="flex gap-4 text-sm" aria-label="Pages of works">
+            {!firstPage && (
+              <Link className="underline" href={link({})}>
+                ← First page
+              </Link>
+            )}
+            {next && (
+              <Link className="underline" href={link({ after: worksCursorText(next) })}>
+                Next page →
+              </Link>
+            )}
+          </nav>
+        </>
       )}
     </div>
   );

@@ -364,3 +364,34 @@ describe("curator merge and split", () => {
     ).toEqual({ work_id: a1Work.id, work_set_by: "curator" });
   });
 });
+
+describe("the practice a dashboard opens on", () => {
+  // Oracle: the matched statements per practice counted straight from statement_practices.
+  const counts = async () =>
+    (
+      await db
+        .selectFrom("statement_practices")
+        .innerJoin("practices", "practices.id", "statement_practices.practice_id")
+        .select(["practice_id", "practices.statistic", (eb) => eb.fn.countAll<number>().as("n")])
+        .groupBy(["practice_id", "practices.statistic"])
+        .execute()
+    ).map((r) => ({ ...r, n: Number(r.n) }));
+
+  it("is the most asserted practice when none is chosen, with its count of matched statements", async () => {
+    const c = await counts();
+    const most = Math.max(...c.map((r) => r.n));
+    expect(most).toBeGreaterThan(0);
+    const d = await dashboardData(db, "practice-over-time", {});
+    expect(c.find((r) => r.practice_id === d.practice?.id)?.n).toBe(most);
+    expect(d.practice?.matched).toBe(most);
+  });
+
+  it("keeps a chosen practice, and under a statistic filter picks among that statistic's practices", async () => {
+    const chosen = await dashboardData(db, "trail-ends", { practice: alpha });
+    expect(chosen.practice?.id).toBe(alpha);
+    // The fixture mines no VIF statements: the pick is still a VIF practice (ties fall to seeded, then key).
+    const vif = await dashboardData(db, "practice-over-time", { statistic: "vif" });
+    expect(vif.practice?.statistic).toBe("vif");
+    expect(vif.practice?.matched).toBe(0);
+  });
+});

@@ -6,25 +6,20 @@ import { can } from "@/lib/auth/permissions";
 import { getDb } from "@/db";
 import { getArticle } from "@/lib/corpus/articles";
 import { listVenues } from "@/db/queries/venues";
-import type { Section } from "@/lib/vocabulary";
-import { SourcingBadge } from "@/components/ui/sourcing-badge";
+import { listProcedures } from "@/lib/corpus/procedures-store";
+import { LABELS, plural, type Section } from "@/lib/vocabulary";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Evidence } from "@/components/articles/highlight";
 import { LiveStatus } from "@/components/articles/live-status";
 import { MetadataForm } from "@/components/articles/metadata-form";
 import { RemineButton, ReviewButtons } from "@/components/articles/statement-actions";
+import { StatementFacts } from "@/components/articles/statement-facts";
 
 export const metadata = { title: "Article" };
 
 const SECTION_ORDER: Section[] = ["introduction", "methods", "results", "discussion", "other", "unknown"];
-const SECTION_LABEL: Record<Section, string> = {
-  introduction: "Introduction",
-  methods: "Methods",
-  results: "Results",
-  discussion: "Discussion",
-  other: "Other sections",
-  unknown: "No section heading found",
-};
+// Headings of the groups (the vocabulary's section names, with "no heading" spelled out).
+const SECTION_LABEL: Record<Section, string> = { ...LABELS.section, unknown: "No section heading found" };
 
 export default async function ArticlePage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePage("corpus:read");
@@ -36,6 +31,9 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
   const { article: a, statements, counts } = detail;
   const curate = can(actor, "corpus:curate");
   const venues = curate ? await listVenues(db) : [];
+  const procedureLabels = statements.some((x) => x.procedure_key)
+    ? new Map((await listProcedures(db)).map((p) => [p.key, p.label]))
+    : new Map<string, string>();
   const bySection = SECTION_ORDER.map((s) => ({ section: s, items: statements.filter((x) => x.section === s) })).filter(
     (g) => g.items.length,
   );
@@ -67,8 +65,8 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
           <LiveStatus articleId={a.id} initial={a.status} reason={a.failure_message} />
           {a.status === "done" && (
             <span className="text-sm text-ink-2 tabular-nums">
-              {a.pages} pages · {statements.length} statements · {counts.citations} citations · {counts.references}{" "}
-              references
+              {plural(a.pages ?? 0, "page")} · {plural(statements.length, "statement")} ·{" "}
+              {plural(counts.citations, "in-text citation")} · {plural(counts.references, "reference")}
             </span>
           )}
           {curate && <RemineButton articleId={a.id} />}
@@ -107,23 +105,15 @@ export default async function ArticlePage({ params }: { params: Promise<{ id: st
                   <li
                     key={s.id}
                     id={`statement-${s.id}`}
-                    className="grid gap-1 border-l-2 border-rule pl-3 scroll-mt-4 target:border-accent target:bg-paper-2"
+                    className={`grid gap-1 border-l-2 pl-3 scroll-mt-4 target:border-accent target:bg-paper-2 ${s.framing === "disputed" ? "border-dashed border-ink-2" : "border-rule"}`}
                     data-testid="statement"
                   >
                     <Evidence sentence={s.sentence} value={s.value} citations={s.citations} />
                     <div className="flex flex-wrap items-center gap-3 text-sm text-ink-2">
-                      {/* Sourcing is about cut-off claims; an obtained value needs no source. */}
-                      {s.kind === "threshold" && <SourcingBadge sourcing={s.sourcing} />}
-                      <span>{s.kind}</span>
-                      {s.statistic && <span>{s.statistic}</span>}
-                      {s.comparator && s.value !== null && (
-                        <span className="tabular-nums">
-                          {s.comparator} {s.value}
-                        </span>
-                      )}
-                      {s.framing && <span>{s.framing}</span>}
-                      {s.procedure_key && <span>{s.procedure_key}</span>}
-                      <span className="tabular-nums">page {s.page ?? "?"}</span>
+                      <StatementFacts
+                        s={s}
+                        procedureLabel={s.procedure_key ? procedureLabels.get(s.procedure_key) : undefined}
+                      />
                       {curate && (
                         <ReviewButtons
                           articleId={a.id}
