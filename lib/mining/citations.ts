@@ -4,20 +4,34 @@
 // returned on its own (secondary: false), because the author did read that one.
 import type { Reference, StatementCitation } from "./contract";
 
-const SURNAME = String.raw`(?:(?:van der|van den|van|von|de|del|della|da|di|du|le|la|al|el)\s)?\p{Lu}[\p{L}'’]+(?:[-–]\p{Lu}?[\p{L}'’]+)*`;
+// A generational suffix ("Jr", "Jr.", "Sr.", "III") stays with the surname it follows.
+const SUFFIX = String.raw`(?:,?\s(?:Jr|Sr)\.?|\s(?:II|III|IV)\b)`;
+const SURNAME = String.raw`(?:(?:van der|van den|van|von|de|del|della|da|di|du|le|la|al|el)\s)?\p{Lu}[\p{L}'’]+(?:[-–]\p{Lu}?[\p{L}'’]+)*${SUFFIX}?`;
 const AUTHORS = String.raw`${SURNAME}(?:\s+et\s+al\.?|(?:,\s*${SURNAME})*,?\s*(?:&|and)\s*${SURNAME})?`;
 const YEAR = String.raw`(?:1[6-9]\d{2}|20\d{2})[a-z]?|n\.d\.|in press|forthcoming`;
-const LOCATOR = String.raw`(?:pp?\.|pages?|chaps?\.|chapters?|ch\.|secs?\.|sections?|§|paras?\.|paragraphs?|¶|fig\.|figs?\.|tables?|notes?|n\.|vols?\.|ll?\.|lines?)\s*[\dA-Za-z]+(?:\.\d+)*(?:\s*[-–—]\s*[\dA-Za-z]+(?:\.\d+)*)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?)*`;
+// Locator terms after the Citation Style Language's locator list (page, chapter, section, paragraph,
+// figure, table, note, volume, line, …), each followed by a number, roman numeral or range; "ff." /
+// "f." (and following) may close it: "p. 361ff.", "pp. 12–14", "chap. 3", "sec. 2.1".
+const FF = String.raw`(?:\s?ff?\.?(?![\p{L}]))?`;
+const LOCATOR = String.raw`(?:pp?\.|pages?|chaps?\.|chapters?|ch\.|secs?\.|sections?|§§?|paras?\.|paragraphs?|¶|fig\.|figs?\.|tables?|notes?|n\.|vols?\.|ll?\.|lines?|art\.|bk\.|col\.|fol\.|op\.|pt\.|v\.|sub verbo|s\.v\.)\s*[\dA-Za-z]+(?:\.\d+)*${FF}(?:\s*[-–—]\s*[\dA-Za-z]+(?:\.\d+)*)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?${FF})*`;
+// Harvard style puts a bare page after a colon: "(1978: 245)", "(2013:238)", "(Okafor 1994: 12–14)".
+const COLON_PAGES = String.raw`[\dxivlc]+${FF}(?:\s*[-–—]\s*[\dxivlc]+)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?)*`;
+const LOCATED = String.raw`(?:\s*,\s*(${LOCATOR})|\s*:\s*(${COLON_PAGES}))`;
+// "see", "e.g.,", "see also", "cf." and the like before a cited work; they may be stacked ("see, e.g.,").
+const PREFIX = String.raw`(?:(?:[Ss]ee also|[Ss]ee|[Ee]\.g\.|[Ii]\.e\.|[Cc]f\.|[Aa]lso|[Ff]or example|[Ff]or a review, see|[Bb]ut see|[Cc]ompare|[Rr]eviewed in)[,:\s]+)*`;
 
 const partRe = new RegExp(
-  String.raw`^(?:(?:see|e\.g\.|cf\.|see also|also|for example|for a review, see)[,\s]+)?(${AUTHORS}),?\s+((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?$`,
+  String.raw`^${PREFIX}(${AUTHORS}),?\s+((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)${LOCATED}?[.,;]?$`,
   "u",
 );
+// Inside the parentheses of a narrative citation "Okafor (1994, p. 12; Lind, 2000)" or
+// "Okafor (1994, cited in Lind, 2000)": years, a locator, then more works or the work it was read in.
 const yearsLocatorRe = new RegExp(
-  String.raw`^((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)(?:\s*,\s*(${LOCATOR}))?(?:\s*;\s*(.*))?$`,
+  String.raw`^((?:${YEAR})(?:\s*,\s*(?:${YEAR}))*)${LOCATED}?(?:\s*[,;]?\s*(?:as\s+)?(?:[Cc]ited|[Qq]uoted)\s+in:?\s+(.*)|\s*;\s*(.*))?$`,
   "u",
 );
-const narrativeRe = new RegExp(String.raw`(${AUTHORS})\s+\(([^()]*)\)`, "gu");
+// The name and its parenthesis may touch ("Okafor(1978)"); a possessive is allowed ("Okafor's (1994)").
+const narrativeRe = new RegExp(String.raw`(${AUTHORS})(?:['’]s)?\s*\(([^()]*)\)`, "gu");
 const notNames = new Set([
   "Table",
   "Tables",
@@ -58,13 +72,18 @@ const notNames = new Set([
   "Survey",
 ]);
 
+function cleanLocator(l: string | undefined): string | null {
+  return l ? l.replace(/\s+/g, " ").trim() : null;
+}
+
 function normAuthors(a: string): string {
   const t = a
     .replace(/\s+/g, " ")
     .trim()
     .replace(/\s+and\s+/g, " & ")
     .replace(/,\s*&/g, " &")
-    .replace(/\bet al(?!\.)/, "et al.");
+    .replace(/\bet al(?!\.)/, "et al.")
+    .replace(/['’]s$/u, "");
   return t;
 }
 
@@ -77,7 +96,8 @@ function splitYears(years: string): string[] {
 /** One part of a parenthetical list, e.g. "Okafor & Lindqvist, 1994, p. 112" or "Whitcombe, 2000, as cited in X, 2014". */
 function parsePart(part: string): FoundCitation[] {
   const p = part.trim().replace(/\s+/g, " ");
-  const ci = /^(.*?),?\s+as cited in\s+(.*)$/i.exec(p);
+  // "as cited in", "cited in", "quoted in" (with or without "as"): the work before it was read second-hand.
+  const ci = /^(.*?)[,;]?\s+(?:as\s+)?(?:cited|quoted)\s+in:?\s+(.*)$/i.exec(p);
   if (ci) {
     const original = parsePart(ci[1]);
     const citing = parsePart(ci[2]);
@@ -98,10 +118,11 @@ function parsePart(part: string): FoundCitation[] {
   const authors = normAuthors(m[1]);
   if (notNames.has(authors.split(" ")[0])) return [];
   const years = splitYears(m[2]);
+  const locator = cleanLocator(m[3] ?? m[4]);
   return years.map((year, i) => ({
     authors,
     year,
-    locator: i === years.length - 1 && m[3] ? m[3].replace(/\s+/g, " ") : null,
+    locator: i === years.length - 1 ? locator : null,
     secondary: false,
   }));
 }
@@ -170,13 +191,17 @@ export function findCitations(sentence: string, numbered: Map<number, Reference>
     if (!inner) continue;
     const authors = normAuthors(authorsRaw);
     const years = splitYears(inner[1]);
+    const locator = cleanLocator(inner[2] ?? inner[3]);
+    const citing = inner[4] ? parseParenthetical(inner[4]) : [];
     const list: FoundCitation[] = years.map((year, i) => ({
       authors,
       year,
-      locator: i === years.length - 1 && inner[2] ? inner[2].replace(/\s+/g, " ") : null,
-      secondary: false,
+      locator: i === years.length - 1 ? locator : null,
+      secondary: citing.length > 0,
+      ...(citing.length ? { citedIn: { authors: citing[0].authors, year: citing[0].year } } : {}),
     }));
-    if (inner[3]) list.push(...parseParenthetical(inner[3]));
+    list.push(...citing);
+    if (inner[5]) list.push(...parseParenthetical(inner[5]));
     found.push({ at: start, c: list });
   }
   for (const m of sentence.matchAll(numberedRe)) {
@@ -186,7 +211,7 @@ export function findCitations(sentence: string, numbered: Map<number, Reference>
       const to = Number(m[3]);
       if (to > last && to - last < 50) for (let i = last + 1; i <= to; i++) nums.push(i);
     }
-    nums = nums.filter((n) => numbered.size === 0 || numbered.has(n));
+    nums = nums.filter((n) => n > 0 && (numbered.size === 0 || numbered.has(n)));
     const list = nums.map((n, i): FoundCitation => {
       const ref = numbered.get(n);
       return {
