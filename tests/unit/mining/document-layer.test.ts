@@ -201,3 +201,30 @@ describe("layout lines", () => {
     ]);
   });
 });
+
+describe("tuning excerpt 31 (citation forms)", () => {
+  it("gets first author, secondary flag and locator of every citation as written in the excerpt", async () => {
+    // Expected values are the citations as written in tests/fixtures/gold/src/31-citation-forms.gold.
+    const { readFileSync } = await import("node:fs");
+    const text = readFileSync(new URL("../../fixtures/gold/31-citation-forms.txt", import.meta.url), "utf8");
+    const got = mineText(text).citations.map((c) => [
+      c.authors.split(/ & | et al\./)[0],
+      c.year,
+      c.locator,
+      c.secondary,
+    ]);
+    expect(got).toEqual([
+      ["Ferreira-Lindahl", "1978", "245", false],
+      ["Ostrowski", "2013", "238", false],
+      ["Bergström", "1962", null, true],
+      ["Nakashima", "2008", null, false],
+      ["Halvorsen", "1978", null, false],
+      ["Pettersen", "1987", null, false],
+      ["Grünewald", "2001", null, false],
+      ["Mbeki-Torres", "2011", "pp. 12–14", false],
+      ["Ranganathan", "1974", "p. 361ff.", false],
+      ["Oyelowo", "2016", "chap. 3", false],
+      ["Wainwright-Sato", "2012", "sec. 2.1", false],
+    ]);
+  });
+});
