@@ -25,7 +25,11 @@ await build({
   platform: "node",
   format: "esm",
   target: "node20",
-  packages: "external",
+  minify: true,
+  sourcemap: "linked",
+  // pdf-parse (with pdf.js) stays outside: it is loaded lazily, only when a PDF arrives, and finds its
+  // worker file next to itself. Everything else is bundled, so start-up resolves and parses one file.
+  external: ["pdf-parse", "pdfjs-dist"],
   tsconfig: path.join(root, "tsconfig.json"),
   logLevel: "warning",
   banner: { js: "// Built by lib/mining/build.mjs from lib/mining/*.ts; do not edit." },
