@@ -6,7 +6,7 @@ import type { Reference, StatementCitation } from "./contract";
 
 // A generational suffix ("Jr", "Jr.", "Sr.", "III") stays with the surname it follows.
 const SUFFIX = String.raw`(?:,?\s(?:Jr|Sr)\.?|\s(?:II|III|IV)\b)`;
-const SURNAME = String.raw`(?:(?:van der|van den|van|von|de|del|della|da|di|du|le|la|al|el)\s)?\p{Lu}[\p{L}'’]+(?:[-–]\p{Lu}?[\p{L}'’]+)*${SUFFIX}?`;
+const SURNAME = String.raw`(?<![\p{L}'’-])(?:(?:[Vv]an der|[Vv]an den|[Vv]an|[Vv]on|[Dd]e|[Dd]el|[Dd]ella|[Dd]a|[Dd]i|[Dd]u|[Dd]os|[Tt]en|[Tt]er|le|la|al|el)\s)?\p{Lu}[\p{L}'’]+(?:[-–]\p{Lu}?[\p{L}'’]+)*${SUFFIX}?`;
 const AUTHORS = String.raw`${SURNAME}(?:\s+et\s+al\.?|(?:,\s*${SURNAME})*,?\s*(?:&|and)\s*${SURNAME})?`;
 const YEAR = String.raw`(?:1[6-9]\d{2}|20\d{2})[a-z]?|n\.d\.|in press|forthcoming`;
 // Locator terms after the Citation Style Language's locator list (page, chapter, section, paragraph,
@@ -76,8 +76,25 @@ function cleanLocator(l: string | undefined): string | null {
   return l ? l.replace(/\s+/g, " ").trim() : null;
 }
 
+// Sentence adverbs and connectives that a list of surnames may swallow when they open a sentence
+// with a comma ("Originally, Bell and Okafor (2002)"); they are dropped from the front of the list.
+const LEAD_WORDS = new Set(
+  "However Moreover Thus Hence Therefore Furthermore Also Here Further Next Then Again Still Indeed Notably Instead Alternatively Specifically Following Like Unlike Both While Whereas Although Because Since Similarly Finally Recently Additionally Originally Conversely Nevertheless Nonetheless Meanwhile Later Earlier First Second Third Lastly Importantly Interestingly Consequently Accordingly Likewise Otherwise Yet So".split(
+    " ",
+  ),
+);
+
+function dropLeadWords(a: string): string {
+  let t = a.trim();
+  for (;;) {
+    const m = /^(\p{Lu}[\p{L}]+),\s+(?=\p{Lu})/u.exec(t);
+    if (!m || !(LEAD_WORDS.has(m[1]) || /ly$/.test(m[1]))) return t;
+    t = t.slice(m[0].length);
+  }
+}
+
 function normAuthors(a: string): string {
-  const t = a
+  const t = dropLeadWords(a)
     .replace(/\s+/g, " ")
     .trim()
     .replace(/\s+and\s+/g, " & ")

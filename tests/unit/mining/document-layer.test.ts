@@ -53,6 +53,13 @@ describe("citation forms", () => {
       year: "1967",
     });
     expect(cite("The Okafor's (1994) rule is used.")[0]).toMatchObject({ authors: "Okafor" });
+    // Capitalised surname particles belong to the surname (APA 7th ed. on "Van", "De", from memory).
+    expect(cite("Abara, Van Reenen, and Zingaro (2013) study it.")[0].authors).toBe("Abara, Van Reenen & Zingaro");
+    expect(cite("In De Vries (1999) it is shown.")[0].authors).toBe("De Vries");
+    // Seen on a real PDF (pdftotext of a Debian r-cran vignette): an opening adverb or the tail of
+    // "model" must not become part of the author list.
+    expect(cite("Originally, Bell and Okafor (2002) proposed it.")[0].authors).toBe("Bell & Okafor");
+    expect(cite("the panel model Newey and Lind (1987) use")[0].authors).toBe("Newey & Lind");
   });
 
   it("prefixes e.g., see also, and CSL locator terms with ff.", () => {
