@@ -18,7 +18,7 @@ import { isReferenceHeading, parseHeading } from "./sections";
 import { splitSentences } from "./sentences";
 import { extractStatements, lastStatistic } from "./statements";
 import { type PositionedItem, pageLinesInReadingOrder } from "./layout";
-import { nonProseLine, nonProseSentence } from "./nonprose";
+import { closesSentence, nonProseLine, nonProseSentence } from "./nonprose";
 import { loadPdfParse } from "./pdfjs";
 import { repairDecimals, repairPages } from "./text-repair";
 
@@ -157,7 +157,7 @@ export function minePages(pages: string[], opts: MinePagesOptions = {}): MinedDo
         !paragraphBreak &&
         !!last &&
         !/[.!?:]\s*$/.test(last.text) &&
-        /[.,;:)\]]$/.test(t);
+        closesSentence(t);
       const nonProse = kind !== null && !tail;
       if (nonProse !== current.nonProse) startBlock(nonProse);
       current.chunks.push({ page, text: line + "\n", newParagraph: paragraphBreak });

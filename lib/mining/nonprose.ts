@@ -58,6 +58,22 @@ export function nonProseLine(line: string): NonProseKind | null {
   return null;
 }
 
+/** Mathematical symbols of a line, not counting comparisons with a number ("= .89"). */
+function mathSymbols(t: string): number {
+  return (t.replace(STAT_REPORT, " STAT ").match(MATH) ?? []).length;
+}
+
+/**
+ * Whether a line can carry on a prose sentence that the line before left open ("… (Okafor,\n2002).",
+ * "… reached\nα = .89.", "… (CFI = .95,\nRMSEA = .05, 90% CI [.04,\n.06])."): it ends with a full
+ * stop, comma or semicolon (inside brackets or quotes too) and carries at most one mathematical symbol,
+ * unlike the lines of a displayed equation ("… − αi(τ)] = 0.").
+ */
+export function closesSentence(line: string): boolean {
+  const t = line.trim();
+  return /[.!?,;]["'”’)\]]*$/.test(t) && mathSymbols(t) <= 1;
+}
+
 /**
  * A sentence that reads as code, console output, a formula or a table row even though its lines were
  * not caught one by one (text glued across lines by a PDF producer, or a plain-text input).
@@ -73,5 +89,9 @@ export function nonProseSentence(sentence: string): NonProseKind | null {
   if (numbers >= 4 && numbers >= 0.4 * tokens.length) return "table";
   const math = (bare.match(MATH) ?? []).length;
   if (math >= 4 && math >= words) return "formula";
+  // Prose with inline mathematics throughout ("… by cjβˆ ± wασˆ cjV c⊤, where wα is …"): at least five
+  // words carry a symbol, and they are a fifth of the sentence or more.
+  const mathTokens = tokens.filter((x) => x !== "STAT" && /[+×∑∏√∫⊤∂∈≈∼^_{}\\ˆ˜¯−±]|[\u0370-\u03ff]/u.test(x)).length;
+  if (mathTokens >= 5 && mathTokens >= 0.2 * tokens.length) return "formula";
   return null;
 }

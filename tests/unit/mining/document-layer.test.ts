@@ -153,6 +153,11 @@ describe("non-prose lines", () => {
     expect(nonProseLine("EA 0.84 0.74 0.72 0.91")).toBe("table");
     expect(nonProseLine("−2L(θ) = log |Λ⊤Z⊤ZΛ + I| + n (1 + log 2πr²)   (12)")).toBe("formula");
     expect(nonProseSentence("6 0.88 0.79 0.71 0.88 0.61 0.77")).toBe("table");
+    // Prose that carries inline mathematics throughout (shape seen in pdftotext output of a Debian
+    // r-cran vignette; symbols invented here).
+    expect(
+      nonProseSentence("Intervals follow as bjβˆ ± zασˆ bjV b⊤, where zα is the 1 − α quantile of the law of T."),
+    ).toBe("formula");
   });
 
   it("prose with reported statistics stays prose", () => {
@@ -165,6 +170,16 @@ describe("non-prose lines", () => {
     ])
       expect(nonProseLine(l)).toBeNull();
     expect(nonProseSentence("The new scale reached α = .74, and work engagement reached α = .89.")).toBeNull();
+  });
+
+  it("a displayed equation's last line does not pass for the tail of the sentence before it", () => {
+    const doc = mineText(
+      ["which gives the final estimating equation,", "∑", "n−1/2 xi[Ni(exp(xβ(τ))) − αi(τ)] = 0.", ""].join("\n"),
+    );
+    expect(doc.statements).toEqual([]);
+    // …while a short closing line of prose still does ("… reached\nα = .89.").
+    const prose = mineText("The new scale reached α = .74, and work engagement reached\nα = .89.\n");
+    expect(prose.statements.map((s) => s.value)).toEqual([0.74, 0.89]);
   });
 
   it("keeps code, output and number rows out of statements but keeps the prose around them", () => {
