@@ -13,7 +13,11 @@ const YEAR = String.raw`(?:1[6-9]\d{2}|20\d{2})[a-z]?|n\.d\.|in press|forthcomin
 // figure, table, note, volume, line, …), each followed by a number, roman numeral or range; "ff." /
 // "f." (and following) may close it: "p. 361ff.", "pp. 12–14", "chap. 3", "sec. 2.1".
 const FF = String.raw`(?:\s?ff?\.?(?![\p{L}]))?`;
-const LOCATOR = String.raw`(?:pp?\.|pages?|chaps?\.|chapters?|ch\.|secs?\.|sections?|§§?|paras?\.|paragraphs?|¶|fig\.|figs?\.|tables?|notes?|n\.|vols?\.|ll?\.|lines?|art\.|bk\.|col\.|fol\.|op\.|pt\.|v\.|sub verbo|s\.v\.)\s*[\dA-Za-z]+(?:\.\d+)*${FF}(?:\s*[-–—]\s*[\dA-Za-z]+(?:\.\d+)*)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?${FF})*`;
+const TERM = String.raw`(?:pp?\.?|pages?|[Cc]haps?\.|[Cc]hapters?|[Cc]h\.|[Ss]ecs?\.|[Ss]ections?|[Ss]ubsections?|§§?|paras?\.|paragraphs?|¶|[Ff]ig\.|[Ff]igs?\.|[Ff]igures?|[Tt]ables?|[Tt]heorems?|[Ll]emmas?|[Ee]quations?|[Ee]qs?\.|[Dd]efinitions?|[Aa]ppendix|[Ee]xamples?|notes?|n\.|vols?\.|ll?\.|lines?|art\.|bk\.|col\.|fol\.|op\.|pt\.|v\.|sub verbo|s\.v\.)`;
+const TERM_LOC = String.raw`${TERM}\s*[\dA-Za-z]+(?:\.\d+)*${FF}(?:\s*[-–—]\s*[\dA-Za-z]+(?:\.\d+)*)?`;
+// Several locators may follow one another: "p. 466, Table 22", "sections 2.10 and 2.16", "Section 7.5,
+// especially Subsection 7.5.4".
+const LOCATOR = String.raw`${TERM_LOC}(?:\s*(?:,|and|&)\s*(?:especially\s+)?(?:${TERM_LOC}|\d+(?:\.\d+)*(?:\s*[-–—]\s*\d+(?:\.\d+)*)?${FF}))*`;
 // Harvard style puts a bare page after a colon: "(1978: 245)", "(2013:238)", "(Okafor 1994: 12–14)".
 const COLON_PAGES = String.raw`[\dxivlc]+${FF}(?:\s*[-–—]\s*[\dxivlc]+)?(?:\s*,\s*\d+(?:\s*[-–—]\s*\d+)?)*`;
 const LOCATED = String.raw`(?:\s*,\s*(${LOCATOR})|\s*:\s*(${COLON_PAGES}))`;
@@ -31,7 +35,8 @@ const yearsLocatorRe = new RegExp(
   "u",
 );
 // The name and its parenthesis may touch ("Okafor(1978)"); a possessive is allowed ("Okafor's (1994)").
-const narrativeRe = new RegExp(String.raw`(${AUTHORS})(?:['’]s)?\s*\(([^()]*)\)`, "gu");
+// Square brackets serve some styles as parentheses ("Okafor [1992]", "[Okafor, 2002; Lind, 2008]").
+const narrativeRe = new RegExp(String.raw`(${AUTHORS})(?:['’]s)?\s*[(\[]([^()[\]]*)[)\]]`, "gu");
 const notNames = new Set([
   "Table",
   "Tables",
@@ -146,8 +151,18 @@ function parsePart(part: string): FoundCitation[] {
 
 function parseParenthetical(inner: string): FoundCitation[] {
   // Parts are separated by ";". A part without its own author ("2003, 2005") is not allowed after a ";".
+  // Some authors separate works by a comma alone ("Okafor, 2002, Lind, 2014"): a part that does not
+  // parse as a whole is tried again cut after each year that a name follows.
   const out: FoundCitation[] = [];
-  for (const part of inner.split(/\s*;\s*/)) out.push(...parsePart(part));
+  for (const part of inner.split(/\s*;\s*/)) {
+    const whole = parsePart(part);
+    if (whole.length) {
+      out.push(...whole);
+      continue;
+    }
+    const pieces = part.split(/(?<=\b(?:1[6-9]\d{2}|20\d{2})[a-z]?),\s+(?=\p{Lu})/u);
+    if (pieces.length > 1) for (const piece of pieces) out.push(...parsePart(piece));
+  }
   return out;
 }
 
@@ -191,7 +206,16 @@ export function findCitations(sentence: string, numbered: Map<number, Reference>
   const found: { at: number; c: FoundCitation[] }[] = [];
   const consumed: [number, number][] = [];
   // Parenthetical groups (balanced one level deep).
-  for (const m of sentence.matchAll(/\(([^()]*(?:\([^()]*\)[^()]*)*)\)/g)) {
+  for (const m of sentence.matchAll(/\(([^()]*(?:\([^()]*\)[^()]*)*)\)|\[([^[\]]*)\]/g)) {
+    if (m[1] === undefined) {
+      // [Okafor, 2002; Lind, 2008]: author–year inside square brackets.
+      const c = /\p{L}{2}/u.test(m[2]) ? parseParenthetical(m[2]) : [];
+      if (c.length) {
+        found.push({ at: m.index!, c });
+        consumed.push([m.index!, m.index! + m[0].length]);
+      }
+      continue;
+    }
     const c = parseParenthetical(m[1]);
     if (c.length) {
       found.push({ at: m.index!, c });
@@ -222,13 +246,15 @@ export function findCitations(sentence: string, numbered: Map<number, Reference>
     found.push({ at: start, c: list });
   }
   for (const m of sentence.matchAll(numberedRe)) {
+    if (consumed.some(([a, b]) => m.index! >= a && m.index! < b)) continue;
     let nums = expandNumbers(m[1]);
     if (m[3]) {
       const last = nums.at(-1) ?? 0;
       const to = Number(m[3]);
       if (to > last && to - last < 50) for (let i = last + 1; i <= to; i++) nums.push(i);
     }
-    nums = nums.filter((n) => n > 0 && (numbered.size === 0 || numbered.has(n)));
+    // A year in square brackets ("Okafor [1992]") is no reference number unless the list has one that high.
+    nums = nums.filter((n) => n > 0 && (numbered.size === 0 ? n < 1000 : numbered.has(n)));
     const list = nums.map((n, i): FoundCitation => {
       const ref = numbered.get(n);
       return {
@@ -241,7 +267,37 @@ export function findCitations(sentence: string, numbered: Map<number, Reference>
     });
     if (list.length) found.push({ at: m.index!, c: list });
   }
+  attachDetachedLocators(sentence, found);
   return found.sort((a, b) => a.at - b.at).flatMap((f) => f.c);
+}
+
+const loneLocatorRe = new RegExp(String.raw`\((${LOCATOR})\)`, "gu");
+const locatorBeforeRe = new RegExp(String.raw`(?:^|[\s(])(${LOCATOR})\s+(?:of|in)\s+$`, "u");
+const locatorAfterRe = new RegExp(String.raw`^\)?\s+(?:in|at)\s+(${LOCATOR})`, "u");
+
+/**
+ * Locators written apart from their citation: "Okafor (1999) … 'a quotation' (p. 140)", "Theorem 6.10
+ * in Okafor (1994)", "(Okafor, 2022a) in sections 2.10 and 2.16". Each is given to the nearest
+ * citation of the sentence that has none (the one before a lone locator; the one it names otherwise).
+ */
+function attachDetachedLocators(sentence: string, found: { at: number; c: FoundCitation[] }[]): void {
+  if (!found.length) return;
+  const byAt = [...found].sort((a, b) => a.at - b.at);
+  for (const m of sentence.matchAll(loneLocatorRe)) {
+    const before = byAt.filter((f) => f.at < m.index!).at(-1);
+    const last = before?.c.at(-1);
+    if (last && last.locator === null && !last.number) last.locator = cleanLocator(m[1]);
+  }
+  for (const f of byAt) {
+    const first = f.c[0];
+    const lastC = f.c.at(-1)!;
+    const head = locatorBeforeRe.exec(sentence.slice(Math.max(0, f.at - 60), f.at));
+    if (head && first.locator === null) first.locator = cleanLocator(head[1]);
+    // The text right after the group: its closing bracket was consumed with it.
+    const end = sentence.indexOf(")", f.at);
+    const tail = end >= 0 ? locatorAfterRe.exec(sentence.slice(end, end + 80)) : null;
+    if (tail && lastC.locator === null) lastC.locator = cleanLocator(tail[1]);
+  }
 }
 
 /** The sentence with its citations taken out, so that years and page numbers are not read as values. */

@@ -76,6 +76,22 @@ describe("citation forms", () => {
     ]);
   });
 
+  it("capitalised CSL terms, several locators, detached locators, brackets and comma-separated works", () => {
+    // Shapes listed in tests/fixtures/real-pdfs/manifest.json (read there from the real PDFs); names invented.
+    expect(cite("This is shown (Okafor, 2011, Section 1.11.5).")[0].locator).toBe("Section 1.11.5");
+    expect(cite("See the table (Lindqvist, 2011, p. 466, Table 22).")[0].locator).toBe("p. 466, Table 22");
+    expect(cite("Okafor (1999) wrote that “scales drift” (p. 140).")[0].locator).toBe("p. 140");
+    expect(cite("See Theorem 6.10 in Okafor (1994).")[0].locator).toBe("Theorem 6.10");
+    expect(cite("The details (Okafor et al., 2022a) in sections 2.10 and 2.16 apply.")[0].locator).toBe(
+      "sections 2.10 and 2.16",
+    );
+    expect(cite("Effect sizes [Okafor, 2002; Lind, 2008] differ.").map((c) => c.year)).toEqual(["2002", "2008"]);
+    expect(cite("As Okafor [1992] noted.")).toEqual([
+      { authors: "Okafor", year: "1992", locator: null, secondary: false },
+    ]);
+    expect(cite("Models (Okafor, 2002, Lind, 2014) agree.").map((c) => c.authors)).toEqual(["Okafor", "Lind"]);
+  });
+
   it("numbered citations without a reference list keep their number and stay valid", () => {
     // Contract (lib/mining/contract.ts): authors and year are strings, number a positive integer.
     expect(cite("The cut-off is .70 [3, p. 12].")).toEqual([
