@@ -17,9 +17,10 @@ import { normaliseDoi, parseReferenceList } from "./references";
 import { isReferenceHeading, parseHeading } from "./sections";
 import { splitSentences } from "./sentences";
 import { extractStatements, lastStatistic } from "./statements";
-import { type PositionedItem, pageTextInReadingOrder } from "./layout";
+import { type PositionedItem, pageLinesInReadingOrder } from "./layout";
+import { closesSentence, nonProseLine, nonProseSentence } from "./nonprose";
 import { loadPdfParse } from "./pdfjs";
-import { repairPages } from "./text-repair";
+import { repairDecimals, repairPages } from "./text-repair";
 
 export type { ProcedurePattern } from "./procedures";
 export { defaultProcedures } from "./procedures";
@@ -71,20 +72,33 @@ class MineError extends Error {
   }
 }
 
-type Block = { section: Section; chunks: { page: number; text: string }[] };
+/** `nonProse`: code, console output, formulas or table rows; its sentences give no statements. */
+type Block = { section: Section; nonProse: boolean; chunks: { page: number; text: string; newParagraph?: boolean }[] };
+
+export type MinePagesOptions = MineTextOptions & {
+  referenceLines?: string[];
+  /** Per page (index 0 = page 1): the trimmed lines that the PDF layer set in a monospaced font. */
+  monoLines?: ReadonlySet<string>[];
+};
 
 /** Mine already-extracted page texts (one string per page). */
-export function minePages(pages: string[], opts: MineTextOptions & { referenceLines?: string[] } = {}): MinedDocument {
+export function minePages(pages: string[], opts: MinePagesOptions = {}): MinedDocument {
   const matchProcedure = compileProcedures(opts.procedures ?? defaultProcedures);
   const blocks: Block[] = [];
   const refLines: string[] = [...(opts.referenceLines ?? [])];
   let section: Section = "unknown";
   let topSection: Section = "unknown";
   let inRefs = false;
-  let current: Block = { section, chunks: [] };
+  let current: Block = { section, nonProse: false, chunks: [] };
   blocks.push(current);
+  let paragraphBreak = false;
+  const startBlock = (nonProse: boolean) => {
+    current = { section, nonProse, chunks: [] };
+    blocks.push(current);
+  };
   pages.forEach((pageText, pi) => {
     const page = pi + 1;
+    const mono = opts.monoLines?.[pi];
     for (const line of pageText.split("\n")) {
       const t = line.trim();
       if (isReferenceHeading(t)) {
@@ -123,11 +137,31 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
           section = section === "unknown" && blocks.length === 1 && !current.chunks.length ? "unknown" : "other";
           if (h.level === 1 && /^\d/.test(t)) topSection = "other";
         }
-        current = { section, chunks: [] };
-        blocks.push(current);
+        startBlock(false);
         continue;
       }
-      current.chunks.push({ page, text: line + "\n" });
+      if (!t) {
+        // A blank line between two lines of one page is a paragraph break: the sentence ends there even
+        // without a full stop (a heading-like line, a caption, a list item). Across a page it is not.
+        const last = current.chunks.at(-1);
+        if (last && last.page === page && !/[-‐–,]\s*$/.test(last.text)) paragraphBreak = true;
+        continue;
+      }
+      const kind = mono?.has(t) ? "code" : nonProseLine(t);
+      // A table-like or formula-like line that closes an open prose sentence ("… (Okafor,\n2002).",
+      // "… reached\nα = .89.") is the tail of that sentence, not a table row or a formula.
+      const last = current.chunks.at(-1);
+      const tail =
+        (kind === "table" || kind === "formula") &&
+        !current.nonProse &&
+        !paragraphBreak &&
+        !!last &&
+        !/[.!?:]\s*$/.test(last.text) &&
+        closesSentence(t);
+      const nonProse = kind !== null && !tail;
+      if (nonProse !== current.nonProse) startBlock(nonProse);
+      current.chunks.push({ page, text: line + "\n", newParagraph: paragraphBreak });
+      paragraphBreak = false;
     }
   });
 
@@ -141,21 +175,35 @@ export function minePages(pages: string[], opts: MineTextOptions & { referenceLi
     if (!block.chunks.length) continue;
     let flat = "";
     const starts: { at: number; page: number }[] = [];
+    // Paragraphs are split into sentences one by one, so a paragraph without a final full stop ends
+    // its last sentence (the statement context, previousStatistic, still runs on through the block).
+    const paragraphs: string[] = [];
+    let paragraph = "";
     for (const c of block.chunks) {
+      if (c.newParagraph && paragraph) {
+        paragraphs.push(paragraph);
+        paragraph = "";
+      }
+      const piece = repairDecimals(`${c.text.replace(/\s+/g, " ").trim()} `);
       starts.push({ at: flat.length, page: c.page });
-      flat += `${c.text.replace(/\s+/g, " ").trim()} `;
+      flat += piece;
+      paragraph += piece;
     }
+    if (paragraph) paragraphs.push(paragraph);
     let cursor = 0;
     // Sentences come in text order, so the page lookup walks forward with them (a scan of every
     // line start per sentence was quadratic in the length of a section).
     let si = 0;
     let previousStatistic: ReturnType<typeof lastStatistic> = null;
-    for (const sentence of splitSentences(flat)) {
+    for (const sentence of paragraphs.flatMap((p) => splitSentences(repairDecimals(p)))) {
       const at = flat.indexOf(sentence.slice(0, 20), cursor);
       const pos = at >= 0 ? at : cursor;
       cursor = at >= 0 ? at + sentence.length : cursor;
       while (si + 1 < starts.length && starts[si + 1].at <= pos) si++;
       const page = starts[si].page;
+      // Code, output, formulas and table rows give neither statements nor citations ("[1] 0.5" is R's
+      // printed output, not reference 1).
+      if (block.nonProse || nonProseSentence(sentence)) continue;
       const cites = findCitations(sentence, numbered);
       for (const c of cites) citations.push({ ...c, page, sentence });
       const stripped = stripCitations(sentence);
@@ -245,7 +293,10 @@ function classifyPdfError(err: unknown): MineError {
 // The slice of pdf.js's document proxy the miner uses. pdf-parse keeps the loaded document in a
 // field its typings call private; it is reached structurally and checked, so a change inside
 // pdf-parse falls back to its own getText() (drawing order) instead of failing.
-type PdfTextContent = { items: ReadonlyArray<PositionedItem | { type: string }> };
+type PdfTextContent = {
+  items: ReadonlyArray<(PositionedItem & { fontName?: string }) | { type: string }>;
+  styles?: Record<string, { fontFamily?: string } | undefined>;
+};
 type PdfPage = { getTextContent(): Promise<PdfTextContent>; cleanup(): unknown };
 type PdfDocument = { numPages: number; getPage(n: number): Promise<PdfPage> };
 
@@ -259,20 +310,35 @@ function loadedDocument(parser: PDFParse): PdfDocument | null {
 const isPositioned = (it: PositionedItem | { type: string }): it is PositionedItem =>
   "str" in it && Array.isArray((it as PositionedItem).transform);
 
-/** Page texts in reading order (see layout.ts); the geometry cost is reported separately. */
-async function pageTexts(parser: PDFParse, total: number): Promise<{ pages: string[]; layoutMs: number }> {
+type PdfPages = { pages: string[]; monoLines: Set<string>[]; layoutMs: number };
+
+/**
+ * Page texts in reading order (see layout.ts); the geometry cost is reported separately. `monoLines`
+ * holds, per page, the lines set mostly in a monospaced font (pdf.js names the font family of each
+ * item's style "monospace" for fixed-pitch fonts): code listings and console output.
+ */
+async function pageTexts(parser: PDFParse, total: number): Promise<PdfPages> {
   const doc = loadedDocument(parser);
   if (!doc) {
     const text = await parser.getText({ pageJoiner: "" });
-    return { pages: text.pages.sort((a, b) => a.num - b.num).map((p) => p.text), layoutMs: 0 };
+    const pages = text.pages.sort((a, b) => a.num - b.num).map((p) => p.text);
+    return { pages, monoLines: pages.map(() => new Set()), layoutMs: 0 };
   }
   const pages: string[] = [];
+  const monoLines: Set<string>[] = [];
   let layoutMs = 0;
   for (let n = 1; n <= total; n++) {
     const page = await doc.getPage(n);
     const content = await page.getTextContent();
     const t = performance.now();
-    pages.push(pageTextInReadingOrder(content.items.filter(isPositioned)));
+    const styles = content.styles ?? {};
+    const items = content.items.filter(isPositioned).map((it) => {
+      const font = (it as { fontName?: string }).fontName;
+      return font && styles[font]?.fontFamily === "monospace" ? { ...it, mono: true } : it;
+    });
+    const lines = pageLinesInReadingOrder(items);
+    pages.push(lines.map((l) => l.text).join("\n"));
+    monoLines.push(new Set(lines.filter((l) => l.mono).map((l) => l.text.trim())));
     layoutMs += performance.now() - t;
     page.cleanup();
     // In this thread pdf.js answers through microtasks only, so without a turn of the event loop no
@@ -281,7 +347,7 @@ async function pageTexts(parser: PDFParse, total: number): Promise<{ pages: stri
     // queue heartbeats waited as long. One macrotask turn per page costs microseconds.
     await new Promise<void>((resolve) => setImmediate(resolve));
   }
-  return { pages, layoutMs };
+  return { pages, monoLines, layoutMs };
 }
 
 /**
@@ -304,7 +370,7 @@ async function readPdf(
   data: Uint8Array,
   maxPages: number,
   timeoutMs: number,
-): Promise<{ pages: string[]; info: Record<string, unknown>; layoutMs: number }> {
+): Promise<PdfPages & { info: Record<string, unknown> }> {
   // Loading pdf.js (first document only) is not the document's time.
   const { PDFParse } = await loadPdfParse();
   // pdf.js takes ownership of (and may detach) the buffer it is given, so it gets a copy.
@@ -318,10 +384,10 @@ async function readPdf(
     if (info.total === 0) throw new MineError("zero_pages", "The PDF has no pages.");
     if (info.total > maxPages)
       throw new MineError("too_many_pages", `The PDF has ${info.total} pages; the limit is ${maxPages}.`);
-    const { pages, layoutMs } = await pageTexts(parser, info.total);
+    const read = await pageTexts(parser, info.total);
     const raw: unknown = info.info;
     const infoDict = raw && typeof raw === "object" ? (raw as Record<string, unknown>) : {};
-    return { pages, info: infoDict, layoutMs };
+    return { ...read, info: infoDict };
   })();
   // After a timeout the work is abandoned and the destroyed document makes it reject; that rejection
   // has nobody left to report to, so it is dropped here explicitly.
@@ -369,7 +435,7 @@ export function createMiner(options: MinerOptions = {}): Miner {
       if (data.byteLength === 0) return errorOutput(file, "empty", "The file is empty.");
       const head = new TextDecoder("latin1").decode(data.subarray(0, 1024));
       if (head.includes("%PDF-")) {
-        const { pages: rawPages, info } = await readPdf(data, maxPages, timeoutMs);
+        const { pages: rawPages, info, monoLines } = await readPdf(data, maxPages, timeoutMs);
         const t1 = performance.now();
         const pages = repairPages(rawPages);
         const chars = pages.join("").replace(/\s/g, "").length;
@@ -381,7 +447,7 @@ export function createMiner(options: MinerOptions = {}): Miner {
             t1 - t0,
           );
         }
-        const doc = minePages(pages, { procedures });
+        const doc = minePages(pages, { procedures, monoLines });
         const line = SuccessLine.parse({ file, ...doc });
         const fromText = metaFromText(pages[0] ?? "");
         const str = (k: string) =>

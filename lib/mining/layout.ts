@@ -12,9 +12,14 @@ export type PositionedItem = {
   transform: readonly number[];
   width: number;
   height: number;
+  /** True when pdf.js reports the item's font as monospaced (its text style's fontFamily "monospace"). */
+  mono?: boolean;
 };
 
-type Segment = { x0: number; x1: number; y: number; size: number; text: string };
+/** One line of a page in reading order; `mono` when most of its characters are set in a monospaced font. */
+export type PageLine = { text: string; mono: boolean };
+
+type Segment = { x0: number; x1: number; y: number; size: number; text: string; monoChars: number; chars: number };
 type Row = { y: number; size: number; segs: Segment[] };
 
 const median = (xs: number[]): number => {
@@ -46,7 +51,8 @@ function rowsOf(items: PositionedItem[]): Row[] {
     .map((it) => {
       const [, , c, d, e, f] = it.transform;
       const size = Math.hypot(c, d) || it.height || 1;
-      return { x0: e, x1: e + Math.max(0, it.width), y: f, size, text: it.str };
+      const chars = it.str.replace(/\s/g, "").length;
+      return { x0: e, x1: e + Math.max(0, it.width), y: f, size, text: it.str, chars, monoChars: it.mono ? chars : 0 };
     })
     .sort((a, b) => b.y - a.y || a.x0 - b.x0);
   type Piece = (typeof pieces)[number];
@@ -75,6 +81,8 @@ function rowsOf(items: PositionedItem[]): Row[] {
         y: row.y,
         size: row.size,
         text: glue(group),
+        chars: group.reduce((n, g) => n + g.chars, 0),
+        monoChars: group.reduce((n, g) => n + g.monoChars, 0),
       });
       group = [];
     };
@@ -143,20 +151,81 @@ function findGutter(rows: Row[]): { from: number; to: number } | null {
 
 /** The text of one page in reading order, one line per row (and per column side), "\n" between. */
 export function pageTextInReadingOrder(items: PositionedItem[]): string {
-  const rotated = items
-    .filter((it) => it.str.trim() && it.transform.length >= 6 && isRotated(it))
-    .map((it) => it.str.trim());
-  const body = bodyInReadingOrder(rowsOf(items));
-  // Rotated text goes after the body, in drawing order, so it cannot split a sentence.
-  return rotated.length ? [body, ...rotated].filter(Boolean).join("\n") : body;
+  return pageLinesInReadingOrder(items)
+    .map((l) => l.text)
+    .join("\n");
 }
 
-function bodyInReadingOrder(rows: Row[]): string {
-  if (!rows.length) return "";
-  const gutter = findGutter(rows);
-  const lineText = (segs: Segment[]) => glue(segs);
-  if (!gutter) return rows.map((r) => lineText(r.segs)).join("\n");
+/**
+ * The lines of one page in reading order. An empty line stands for white between two lines of one
+ * column that is taller than a paragraph break (more than 1.6 line pitches; common practice, no
+ * source): the miner ends a sentence there even when the paragraph has no final full stop.
+ */
+export function pageLinesInReadingOrder(items: PositionedItem[]): PageLine[] {
+  const rotated = items
+    .filter((it) => it.str.trim() && it.transform.length >= 6 && isRotated(it))
+    .map((it): PageLine => ({ text: it.str.trim(), mono: false }));
+  const body = bodyInReadingOrder(rowsOf(items));
+  // Rotated text goes after the body, in drawing order, so it cannot split a sentence.
+  return [...body, ...rotated];
+}
 
+/** A line from segments: its text, and whether most of its characters are monospaced (≥ 60%; common practice, no source). */
+function lineOf(segs: Segment[]): PageLine {
+  const chars = segs.reduce((n, s) => n + s.chars, 0);
+  const mono = segs.reduce((n, s) => n + s.monoChars, 0);
+  return { text: glue(segs), mono: chars > 0 && mono >= 0.6 * chars };
+}
+
+type Placed = { y: number; x0: number; x1: number; size: number; line: PageLine };
+
+const placed = (y: number, segs: Segment[]): Placed => ({
+  y,
+  x0: Math.min(...segs.map((s) => s.x0)),
+  x1: Math.max(...segs.map((s) => s.x1)),
+  size: median(segs.map((s) => s.size)),
+  line: lineOf(segs),
+});
+
+/**
+ * Lines of rows read top to bottom, with an empty line at a paragraph break: white between two rows
+ * taller than 1.6 line pitches, or a line that stops well short of the column's right edge (more than
+ * 3 em and a tenth of the column) in justified type, followed by one that starts indented or at the
+ * left edge (the last line of a paragraph set without extra space). Common practice of typesetting, no source.
+ */
+function withGaps(rows: Placed[], pitch: number): PageLine[] {
+  const out: PageLine[] = [];
+  const left = Math.min(...rows.map((r) => r.x0));
+  const right = Math.max(...rows.map((r) => r.x1));
+  const width = right - left;
+  // The short-line rule needs justified type (most lines reach the right edge); ragged-right text has
+  // short lines everywhere.
+  const justified = rows.filter((r) => right - r.x1 < r.size).length >= 0.5 * rows.length;
+  let prev: Placed | null = null;
+  for (const r of rows) {
+    if (prev) {
+      const gap = pitch > 0 && prev.y - r.y > 1.6 * pitch;
+      const short = justified && rows.length >= 4 && right - prev.x1 > Math.max(3 * prev.size, 0.1 * width);
+      const startsLine = r.x0 - left < 3 * r.size;
+      if (gap || (short && startsLine && prev.line.text && r.line.text)) out.push({ text: "", mono: false });
+    }
+    out.push(r.line);
+    prev = r;
+  }
+  return out;
+}
+
+function bodyInReadingOrder(rows: Row[]): PageLine[] {
+  if (!rows.length) return [];
+  const gutter = findGutter(rows);
+  if (!gutter) {
+    const steps = rows.slice(1).map((r, i) => rows[i].y - r.y);
+    const pitch = median(steps.filter((s) => s > 0)) || median(rows.map((r) => r.size)) * 1.2;
+    return withGaps(
+      rows.map((r) => placed(r.y, r.segs)),
+      pitch,
+    );
+  }
   const mid = (gutter.from + gutter.to) / 2;
   const spans = (s: Segment) => s.x0 < gutter.from - 0.5 && s.x1 > gutter.to + 0.5;
   // Line pitch within one column: the step from one row to the next on the same side.
@@ -190,20 +259,27 @@ function bodyInReadingOrder(rows: Row[]): string {
     prevY = r.y;
   }
 
-  const out: string[] = [];
+  const out: PageLine[] = [];
   for (const z of zones) {
     if (z.kind === "full") {
-      for (const r of z.rows) out.push(lineText(r.segs));
+      out.push(
+        ...withGaps(
+          z.rows.map((r) => placed(r.y, r.segs)),
+          pitch,
+        ),
+      );
       continue;
     }
     // A segment belongs to the side that holds most of it.
     const isLeft = (s: Segment) => mid - s.x0 >= s.x1 - mid;
     for (const left of [true, false]) {
+      const side: Placed[] = [];
       for (const r of z.rows) {
         const segs = r.segs.filter((s) => isLeft(s) === left);
-        if (segs.length) out.push(lineText(segs));
+        if (segs.length) side.push(placed(r.y, segs));
       }
+      out.push(...withGaps(side, pitch));
     }
   }
-  return out.join("\n");
+  return out;
 }

@@ -36,7 +36,76 @@ export function splitReferences(text: string): string[] {
       else entries[entries.length - 1] = `${prev} ${line}`;
     }
   }
-  return entries;
+  return entries.flatMap(splitRunIn);
+}
+
+// Run-in reference lists (entries set one after another in a block, not each on its own line; or
+// lines whose starts the patterns above do not know, such as "Okafor EA (1994).") come out of the
+// line pass as one entry holding several works. Such an entry is split again where a new work starts:
+// before each author list followed by a parenthesised year, at consecutively numbered starts ("[1] …
+// [2] …", "1. … 2. …"), or, for styles that put the year last, after "…, 1987." followed by a name.
+const YEAR_PAREN_G = new RegExp(YEAR_PAREN.source, "g");
+const NAME_TOKEN =
+  /^(?:\p{Lu}[\p{L}'’-]*[,;]?|\p{Lu}\.(?:-?\p{Lu}\.)*[,;]?|&|and|et|al\.?,?|van|von|de|der|den|du|da|di|la|le|Jr\.?,?|Sr\.?,?|\.\.\.,?|…,?)$/u;
+/** Where the author list that ends at `end` begins (walking back over name-like words), or null. */
+function authorStart(text: string, end: number): number | null {
+  const head = text.slice(0, end);
+  const tokens = [...head.matchAll(/\S+/g)];
+  let start: number | null = null;
+  for (let i = tokens.length - 1, n = 0; i >= 0 && n < 40; i--, n++) {
+    const tok = tokens[i][0];
+    // A capitalised word closed by a full stop ("Press.", "York.") ends the previous entry.
+    if (!NAME_TOKEN.test(tok) || (/^\p{Lu}\p{L}{2,}\.$/u.test(tok) && !/^(?:Jr|Sr)\.$/.test(tok))) break;
+    start = tokens[i].index;
+  }
+  return start;
+}
+
+function consecutiveStarts(text: string, re: RegExp): number[] {
+  const out: number[] = [];
+  let expect: number | null = null;
+  for (const m of text.matchAll(re)) {
+    const n = Number(m[1]);
+    if (expect === null || n === expect) {
+      out.push(m.index + (m[0].length - m[0].trimStart().length));
+      expect = n + 1;
+    }
+  }
+  return out;
+}
+
+function cutAt(text: string, starts: number[]): string[] {
+  const cuts = [...new Set(starts)].filter((s) => s > 0).sort((a, b) => a - b);
+  const out: string[] = [];
+  let from = 0;
+  for (const c of cuts) {
+    const piece = text.slice(from, c).trim();
+    if (piece) out.push(piece);
+    from = c;
+  }
+  const last = text.slice(from).trim();
+  if (last) out.push(last);
+  return out;
+}
+
+export function splitRunIn(entry: string): string[] {
+  if (entry.length < 120) return [entry];
+  const bracketed = consecutiveStarts(entry, /(?:^|\s)\[(\d{1,4})\]\s/g);
+  if (bracketed.length >= 2) return cutAt(entry, bracketed);
+  const dotted = consecutiveStarts(entry, /(?:^|\s)(\d{1,4})\.\s+(?=\p{Lu})/gu);
+  if (dotted.length >= 3 && dotted[0] === 0) return cutAt(entry, dotted);
+  const years = [...entry.matchAll(YEAR_PAREN_G)];
+  if (years.length >= 2) {
+    const starts = years.map((m) => authorStart(entry, m.index)).filter((s): s is number => s !== null);
+    return cutAt(entry, starts);
+  }
+  const yearLast = [...entry.matchAll(/\b(?:1[6-9]|20)\d{2}[a-z]?\.\s+(?=\p{Lu}[\p{L}'’-]*\.?\s)/gu)];
+  if (yearLast.length >= 1)
+    return cutAt(
+      entry,
+      yearLast.map((m) => m.index + m[0].length),
+    );
+  return [entry];
 }
 
 function clean(s: string | undefined | null): string | null {

@@ -78,3 +78,18 @@ export function repairPages(pages: string[]): string[] {
   const vocabulary = vocabularyOf(cleaned);
   return cleaned.map((p) => joinHyphenated(p, vocabulary));
 }
+
+/**
+ * Decimals broken by extraction or typesetting, repaired so that no sentence ends at them: "0. 70"
+ * (a line or item break after the point) → "0.70"; "= . 70" → "= .70"; the middle dot of journals
+ * that set decimals with it ("0·70", "12·5") → "0.70". A full stop after a zero before a number is not
+ * a sentence end in prose ("0. 70 …" never is), so only a lone leading zero is joined; "in 2010. 70
+ * participants" stays as it is. The replacement keeps the text's length where it can (positions of later
+ * sentences are found by search, not offset). Measured on none: a rule of thumb, no source.
+ */
+export function repairDecimals(text: string): string {
+  return text
+    .replace(/(?<![\d.,])0\. (\d)/g, "0.$1")
+    .replace(/([=<>≤≥]\s?)\. (\d)/g, "$1.$2")
+    .replace(/(\d)·(\d)/g, "$1.$2");
+}

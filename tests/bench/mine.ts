@@ -5,6 +5,12 @@
  * peak on one 300-page PDF. Runs on the private test cluster, in databases of its own.
  * Targets (issue 3): (c, two workers) >= 35% of (a); miner's own work after text extraction < 20%
  * of the total; peak worker memory < 400 MB on the 300-page PDF.
+ *
+ * Real PDFs (the openly licensed documents of tests/fixtures/real-pdfs, installed by its install.sh,
+ * or any folder of PDFs named by BENCH_REAL_PDFS): (r1) pdftotext as one process per file, (r2) the
+ * mining CLI as one whole process per file (`node lib/mining/mine.mjs FILE`, the bundle of `npm run
+ * build:miner`), (r3) the worker pipeline with one worker. Target: (r2) >= 25% of (r1)'s pages/s.
+ * BENCH_REAL_ONLY=1 measures the real PDFs alone.
  */
 import { spawn, execFileSync, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
@@ -191,8 +197,84 @@ async function pipeline(files: string[], pages: number, workers: number) {
   };
 }
 
+/** The real PDFs: BENCH_REAL_PDFS (a folder), else the manifest's files after its install.sh has run. */
+function realPdfs(): string[] {
+  const walk = (d: string): string[] =>
+    fs.readdirSync(d, { withFileTypes: true }).flatMap((e) => {
+      const p = path.join(d, e.name);
+      return e.isDirectory() ? walk(p) : e.name.toLowerCase().endsWith(".pdf") ? [p] : [];
+    });
+  if (process.env.BENCH_REAL_PDFS) return walk(process.env.BENCH_REAL_PDFS).sort();
+  const dir = path.join(ROOT, "tests/fixtures/real-pdfs");
+  const manifest = path.join(dir, "manifest.json");
+  if (!fs.existsSync(manifest)) return [];
+  if (fs.existsSync(path.join(dir, "install.sh")))
+    execFileSync("bash", [path.join(dir, "install.sh")], { stdio: "inherit" });
+  // Every string of the manifest that names an existing PDF file.
+  const found = new Set<string>();
+  const visit = (v: unknown): void => {
+    if (typeof v === "string" && /\.pdf$/i.test(v)) {
+      for (const p of [v, path.join(dir, v), path.join(ROOT, v)]) if (fs.existsSync(p)) found.add(path.resolve(p));
+    } else if (Array.isArray(v)) v.forEach(visit);
+    else if (v && typeof v === "object") Object.values(v).forEach(visit);
+  };
+  visit(JSON.parse(fs.readFileSync(manifest, "utf8")));
+  return [...found].sort();
+}
+
+function wholeProcessRates(files: string[], pages: number) {
+  execFileSync(process.execPath, [path.join(ROOT, "lib/mining/build.mjs")], { cwd: ROOT });
+  const t0 = performance.now();
+  for (const f of files) execFileSync("pdftotext", ["-q", f, "-"], { maxBuffer: 256 * 1024 * 1024 });
+  const pdftotextS = (performance.now() - t0) / 1000;
+  const t1 = performance.now();
+  for (const f of files) {
+    // exit 2 (a file that cannot be mined) still prints its line; only the time is measured here
+    try {
+      execFileSync(process.execPath, [path.join(ROOT, "lib/mining/mine.mjs"), f], {
+        cwd: ROOT,
+        maxBuffer: 256 * 1024 * 1024,
+        stdio: ["ignore", "ignore", "ignore"],
+      });
+    } catch {
+      /* counted in the time all the same */
+    }
+  }
+  const cliS = (performance.now() - t1) / 1000;
+  return { pdftotext: pages / pdftotextS, cli: pages / cliS, pdftotextS, cliS };
+}
+
+async function realSection() {
+  const files = realPdfs();
+  if (!files.length) {
+    console.log("\n[bench] no real PDFs (set BENCH_REAL_PDFS or add tests/fixtures/real-pdfs/manifest.json)");
+    return;
+  }
+  const pages = files.reduce((n, f) => n + pagesOf(f), 0);
+  console.log(`\n[bench] real PDFs: ${files.length} files, ${pages} pages`);
+  const r = wholeProcessRates(files, pages);
+  const w = await pipeline(files, pages, 1);
+  const pct = (x: number) => `${(100 * x).toFixed(0)}%`;
+  console.log("\n| real PDFs | pages/s | share of pdftotext | notes |");
+  console.log("|---|---:|---:|---|");
+  console.log(
+    `| (r1) pdftotext, one process per file | ${r.pdftotext.toFixed(1)} | 100% | ${r.pdftotextS.toFixed(1)} s |`,
+  );
+  console.log(
+    `| (r2) mining CLI, one whole process per file | ${r.cli.toFixed(1)} | ${pct(r.cli / r.pdftotext)} | ${r.cliS.toFixed(1)} s; target >= 25%: ${r.cli / r.pdftotext >= 0.25 ? "met" : "NOT met"} |`,
+  );
+  console.log(
+    `| (r3) worker pipeline, 1 worker | ${w.pagesPerSecond.toFixed(1)} | ${pct(w.pagesPerSecond / r.pdftotext)} | ${w.done} done, ${w.failed} failed, ${w.statements} statements; extraction ${(w.readMs / 1000).toFixed(1)} s, mining ${(w.mineMs / 1000).toFixed(1)} s, store ${(w.storeMs / 1000).toFixed(1)} s; peak RSS ${w.peakMb.toFixed(0)} MB (< 400 MB: ${w.peakMb < 400 ? "met" : "NOT met"}) |`,
+  );
+}
+
 up("test");
 await prepareTemplate();
+if (process.env.BENCH_REAL_ONLY) {
+  await realSection();
+  fs.rmSync(work, { recursive: true, force: true });
+  process.exit(0);
+}
 console.log(
   `[bench] generating ${COUNT} PDFs (~${PAGES_PER} pages each) with lib/demo … (load average ${os
     .loadavg()
@@ -237,5 +319,6 @@ console.log(
 console.log(
   `\nTargets: two workers >= 35% of pdftotext: ${c2.pagesPerSecond / a.pagesPerSecond >= 0.35 ? "met" : "NOT met"}; miner after extraction < 20%: ${minerShare(c2) < 0.2 ? "met" : "NOT met"}; peak < 400 MB on the 300-page PDF: ${big.peakMb < 400 ? "met" : "NOT met"}.`,
 );
+await realSection();
 fs.rmSync(work, { recursive: true, force: true });
 process.exit(0);

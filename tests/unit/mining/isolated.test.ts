@@ -50,7 +50,10 @@ describe("createIsolatedMiner", () => {
   });
 
   it("turns a memory breach into an error line, and the next document still mines", async () => {
-    const hog = await miner.mine({ data: new Uint8Array(8), filename: TEST_OOM_FILENAME });
+    // Its own miner with a generous time limit: on a busy machine filling 300 MB took longer than the
+    // 3 s limit above, and the hog ended as a timeout instead of a memory breach.
+    const roomy = createIsolatedMiner({ hardTimeoutMs: 60_000, memoryLimitMb: 300 });
+    const hog = await roomy.mine({ data: new Uint8Array(8), filename: TEST_OOM_FILENAME }).finally(() => roomy.close());
     expect(hog.line).toMatchObject({ error: { code: "too_large" } });
     if (!isErrorLine(hog.line)) throw new Error("expected an error line");
     expect(hog.line.error.message).toMatch(/more than 300 MB of memory/);
