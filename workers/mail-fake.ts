@@ -9,6 +9,7 @@ import http from "node:http";
 import fs from "node:fs";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
+import { env } from "@/lib/env";
 
 export type CapturedMail = {
   id: string;
@@ -92,9 +93,10 @@ export function startMailFake(opts: { smtpPort: number; httpPort: number; dir: s
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
-  const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
-  const httpPort = Number(process.env.MAIL_FAKE_HTTP_PORT ?? 2526);
-  const dir = process.env.MAIL_FAKE_DIR ?? path.resolve(import.meta.dirname, "..", ".data", "mail");
+  const e = env();
+  const smtpPort = e.SMTP_PORT;
+  const httpPort = e.MAIL_FAKE_HTTP_PORT;
+  const dir = e.MAIL_FAKE_DIR ?? path.resolve(import.meta.dirname, "..", ".data", "mail");
   const fake = startMailFake({ smtpPort, httpPort, dir });
   console.log(`[mail] fake SMTP on 127.0.0.1:${smtpPort}, captured mail at http://localhost:${httpPort}/`);
   const stop = () => fake.close().then(() => process.exit(0));

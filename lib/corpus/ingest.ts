@@ -7,7 +7,8 @@ import { sql, type Transaction } from "kysely";
 import type { Database, DB } from "@/db";
 import type { FileStorage } from "@/lib/storage";
 import { detectKind } from "./detect";
-import { enqueueMining, senderFor } from "./queue";
+import { installQueues } from "@/lib/jobs/registry";
+import { mineArticle } from "@/lib/jobs/mining";
 import { recordEvent } from "./events";
 import { normaliseDoi } from "./doi";
 
@@ -61,7 +62,8 @@ export async function ingestFile(
   // The file is written before the rows: a rolled-back transaction leaves at most an unreferenced
   // file, which is harmless because storage is content-addressed and a retry reuses it.
   const key = await storage.put(sha, input.data);
-  const boss = await senderFor(db);
+  // Installs pg-boss and the queues when no worker has done so yet (a first upload); once per handle.
+  await installQueues(db);
   const m = input.metadata ?? {};
   try {
     return await db.transaction().execute(async (trx) => {
@@ -98,7 +100,7 @@ export async function ingestFile(
         return { articleId: existing.id, duplicate: true };
       }
       await recordEvent(trx, inserted.id, "uploaded", null);
-      await queueArticle(trx, boss, inserted.id, "upload");
+      await queueArticle(trx, inserted.id, "upload");
       if (input.batchId) {
         await trx
           .updateTable("upload_batches")
@@ -125,11 +127,10 @@ export async function ingestFile(
 /** Marks an article queued and sends its mining job, inside the caller's transaction. */
 export async function queueArticle(
   trx: Transaction<Database>,
-  boss: Awaited<ReturnType<typeof senderFor>>,
   articleId: string,
   reason: "upload" | "remine",
 ): Promise<boolean> {
-  const jobId = await enqueueMining(boss, trx, { articleId, reason });
+  const jobId = await mineArticle.send(trx, { articleId, reason });
   if (!jobId) return false;
   await trx
     .updateTable("articles")

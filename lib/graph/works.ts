@@ -1,5 +1,5 @@
 import { sql, type Transaction } from "kysely";
-import type { DB, Database } from "@/db";
+import { inTransaction, type DB, type Database } from "@/db";
 import type { WorkType } from "@/lib/vocabulary";
 import { HttpError } from "@/lib/server/errors";
 import { firstAuthorSurname, normaliseTitle, normaliseYear } from "@/lib/resolve";
@@ -27,7 +27,7 @@ export async function typeWorks(db: Handle, workIds?: readonly string[]): Promis
   );
 }
 
-export async function setWorkType(db: DB, workId: string, type: WorkType): Promise<void> {
+export async function setWorkType(db: Handle, workId: string, type: WorkType): Promise<void> {
   const r = await db
     .updateTable("works")
     .set({ work_type: type, type_decided_by: "curator" })
@@ -42,9 +42,9 @@ export async function setWorkType(db: DB, workId: string, type: WorkType): Promi
  * source checks move to the kept work, and the merged work points at it so old links still land.
  * The caller rebuilds every practice's trails (a merge can join two chains anywhere).
  */
-export async function mergeWorks(db: DB, fromId: string, intoId: string): Promise<void> {
+export async function mergeWorks(db: Handle, fromId: string, intoId: string): Promise<void> {
   if (fromId === intoId) throw new HttpError(400, "invalid", "Pick two different works to merge.", "intoId");
-  await db.transaction().execute(async (trx) => {
+  await inTransaction(db, async (trx) => {
     const both = await trx
       .selectFrom("works")
       .selectAll()
@@ -97,10 +97,10 @@ export async function mergeWorks(db: DB, fromId: string, intoId: string): Promis
  * Returns the new work's id. The moved references are marked as placed by a curator, so
  * re-resolution does not score them back onto the work they were split from.
  */
-export async function splitWork(db: DB, workId: string, referenceIds: readonly string[]): Promise<string> {
+export async function splitWork(db: Handle, workId: string, referenceIds: readonly string[]): Promise<string> {
   if (referenceIds.length === 0)
     throw new HttpError(400, "invalid", "Choose at least one reference to split off.", "referenceIds");
-  return db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const refs = await trx
       .selectFrom("references")
       .selectAll()

@@ -6,6 +6,7 @@
 import fs from "node:fs/promises";
 import path from "node:path";
 import { randomBytes } from "node:crypto";
+import { filesDir } from "@/lib/env";
 
 export interface FileStorage {
   /** Stores the bytes under their hash and returns the key to read them back with. Idempotent. */
@@ -72,9 +73,6 @@ let defaultStorage: FileStorage | null = null;
  * ECHOLINE_FILES_DIR, else `files/` inside ECHOLINE_DATA_DIR (set by the process stack), else .data/files.
  */
 export function getStorage(): FileStorage {
-  const dir =
-    process.env.ECHOLINE_FILES_DIR ??
-    (process.env.ECHOLINE_DATA_DIR ? path.join(process.env.ECHOLINE_DATA_DIR, "files") : undefined);
-  defaultStorage ??= folderStorage(dir);
+  defaultStorage ??= folderStorage(filesDir());
   return defaultStorage;
 }

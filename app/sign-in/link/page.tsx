@@ -2,7 +2,7 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db";
 import { hashLinkToken } from "@/lib/server/auth";
-import { appUrl } from "@/lib/server/mail";
+import { appUrl } from "@/lib/env";
 
 export const metadata = { title: "Sign-in link" };
 

@@ -21,8 +21,12 @@ export const GET = route({ permission: "corpus:read" }, async ({ params }) => {
 export const PATCH = route(
   { permission: "corpus:curate", body: z.object({ workType: z.enum(["methods_source", "empirical", "unknown"]) }) },
   async ({ params, body }) => {
-    await setWorkType(getDb(), id(params.id), body.workType);
-    await rebuildAllSoon(getDb());
+    await getDb()
+      .transaction()
+      .execute(async (trx) => {
+        await setWorkType(trx, id(params.id), body.workType);
+        await rebuildAllSoon(trx);
+      });
     return { ok: true };
   },
 );

@@ -11,8 +11,12 @@ export const POST = route(
   async ({ params, body }) => {
     const from = z.uuid().safeParse(params.id);
     if (!from.success) throw new HttpError(400, "invalid", "That is not a work id.", "id");
-    await mergeWorks(getDb(), from.data, body.intoId);
-    await rebuildAllSoon(getDb());
+    await getDb()
+      .transaction()
+      .execute(async (trx) => {
+        await mergeWorks(trx, from.data, body.intoId);
+        await rebuildAllSoon(trx);
+      });
     return { ok: true, workId: body.intoId };
   },
 );

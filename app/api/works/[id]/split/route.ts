@@ -14,8 +14,13 @@ export const POST = route(
   async ({ params, body }) => {
     const from = z.uuid().safeParse(params.id);
     if (!from.success) throw new HttpError(400, "invalid", "That is not a work id.", "id");
-    const workId = await splitWork(getDb(), from.data, body.referenceIds);
-    await rebuildAllSoon(getDb());
+    const workId = await getDb()
+      .transaction()
+      .execute(async (trx) => {
+        const workId = await splitWork(trx, from.data, body.referenceIds);
+        await rebuildAllSoon(trx);
+        return workId;
+      });
     return { ok: true, workId };
   },
 );
