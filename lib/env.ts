@@ -101,7 +101,7 @@ export class EnvError extends Error {
 }
 
 /** Parses an environment (process.env by default). Empty strings count as unset. */
-export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
+export function parseEnv(source: Record<string, string | undefined> = process.env): Env {
   const input: Record<string, string> = {};
   for (const key of Object.keys(envSchema.shape)) {
     const v = source[key];

@@ -13,12 +13,17 @@ export function jobReader(db: Executor): PgBoss {
 }
 
 /** Polls `check` until it returns a value (not undefined) or the deadline passes. */
-export async function until<T>(check: () => Promise<T | undefined>, timeoutMs: number, what: string): Promise<T> {
+export async function until<T>(
+  check: () => Promise<T | undefined>,
+  timeoutMs: number,
+  what: string | (() => string),
+): Promise<T> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const v = await check();
     if (v !== undefined) return v;
-    if (Date.now() > deadline) throw new Error(`timed out after ${timeoutMs} ms: ${what}`);
+    if (Date.now() > deadline)
+      throw new Error(`timed out after ${timeoutMs} ms: ${typeof what === "function" ? what() : what}`);
     await new Promise((r) => setTimeout(r, 100));
   }
 }
