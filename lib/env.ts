@@ -6,7 +6,8 @@
  *
  * Read where they are (clearly scoped to tests or benchmarks, never by the product):
  * - tests: ECHOLINE_E2E_PORT_BASE (tests/helpers/browser.ts), ECHOLINE_TEMPLATE_READY (tests/run.ts,
- *   tests/setup/*), AUTH_SECRET set by tests/unit/server/session-token.test.ts;
+ *   tests/setup/*), ECHOLINE_SKIP_BUILD (tests/run.ts, as `npm start` reads it here), and the
+ *   variables unit tests set for the code under test (AUTH_SECRET, ECHOLINE_TEST_HOOKS);
  * - benchmarks: BENCH_SCALE, BENCH_REPEAT, BENCH_APP_PORT, BENCH_COUNT, BENCH_PAGES_PER, BENCH_QUEUES,
  *   BENCH_VERBOSE (tests/bench/*).
  * Scripts that start children (tests/run.ts, workers/stack.ts, db/cluster.ts) still pass process.env
