@@ -171,7 +171,11 @@ export function superviseProcess(opts: {
   };
 }
 
-export async function startStack(cfg: StackConfig): Promise<Stack> {
+/**
+ * Starts the three processes and resolves once the web server and the mail fake answer. `spawned`
+ * gets the stack at once, so a Ctrl-C during start-up can stop the children (and their restarts).
+ */
+export async function startStack(cfg: StackConfig, spawned?: (stack: Stack) => void): Promise<Stack> {
   const env = stackEnv(cfg);
   const children: Supervised[] = [];
   const start = (name: string, p: { cmd: string; args: string[] }) =>
@@ -182,6 +186,7 @@ export async function startStack(cfg: StackConfig): Promise<Stack> {
   const stop = async () => {
     await Promise.all(children.map((c) => c.stop()));
   };
+  spawned?.({ children, stop });
   try {
     await waitForHttp(`http://127.0.0.1:${cfg.appPort}/sign-in`, 90_000);
     await waitForHttp(`http://127.0.0.1:${cfg.mailHttpPort}/messages`, 30_000);

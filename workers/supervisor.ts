@@ -59,7 +59,7 @@ try {
   await installQueues(db);
   await db.destroy();
   if (config.ECHOLINE_SKIP_BUILD !== "1") await runBuild(process.env);
-  stack = await startStack(cfg);
+  stack = await startStack(cfg, (s) => (stack = s));
   console.log(
     `\n[echoline] ready in ${((Date.now() - t0) / 1000).toFixed(1)} s at http://localhost:${cfg.appPort}  (mail fake: http://localhost:${cfg.mailHttpPort}/, data: ${path.relative(process.cwd(), DATA_DIR)}/)`,
   );
