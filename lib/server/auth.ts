@@ -33,12 +33,6 @@ function adapter(): Adapter {
   const base = KyselyAdapter(db as never) as Adapter;
   return {
     ...base,
-    // next-auth creates the token and asks for the e-mail at the same time; the token row is written
-    // by sendVerificationRequest below instead, in one transaction with the mail job, so the mail can
-    // never arrive before its token exists (it did: a fast mail job beat the adapter's insert).
-    async createVerificationToken(token) {
-      return token;
-    },
     async useVerificationToken(params) {
       const used = await base.useVerificationToken!(params);
       if (used) {
@@ -78,7 +72,7 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
       },
       from: smtpSettings().from,
       maxAge: 24 * 60 * 60,
-      async sendVerificationRequest({ identifier, url, token, expires }) {
+      async sendVerificationRequest({ identifier, url }) {
         // Same answer for unknown or deactivated addresses; only invited, active people get a link.
         const user = await getDb()
           .selectFrom("User")
@@ -91,16 +85,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
         // before handing over to next-auth's callback.
         const u = new URL(url);
         const link = `${appUrl()}/sign-in/link?${u.searchParams.toString()}`;
-        // The token (hashed as next-auth hashes it) and its mail job commit together.
-        await getDb()
-          .transaction()
-          .execute(async (trx) => {
-            await trx
-              .insertInto("VerificationToken")
-              .values({ identifier, token: hashLinkToken(token), expires })
-              .execute();
-            await sendMail.send(trx, { template: "sign-in", to: identifier, link });
-          });
+        // A mail job (retried while SMTP is down); next-auth has already stored the token.
+        await sendMail.send(getDb(), { template: "sign-in", to: identifier, link });
       },
     }),
     Credentials({
