@@ -8,6 +8,7 @@
 import { execFileSync, spawnSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
+import { clusterDatabaseUrl, env } from "@/lib/env";
 
 export type ClusterName = "dev" | "test";
 
@@ -15,12 +16,13 @@ const ROOT = path.resolve(import.meta.dirname, "..");
 export const DATA_DIR = path.join(ROOT, ".data");
 
 export const CLUSTERS: Record<ClusterName, { port: number; dir: string }> = {
-  dev: { port: Number(process.env.ECHOLINE_PG_PORT ?? 54320), dir: path.join(DATA_DIR, "pg") },
-  test: { port: Number(process.env.ECHOLINE_TEST_PG_PORT ?? 54321), dir: path.join(DATA_DIR, "pg-test") },
+  dev: { port: env().ECHOLINE_PG_PORT, dir: path.join(DATA_DIR, "pg") },
+  test: { port: env().ECHOLINE_TEST_PG_PORT, dir: path.join(DATA_DIR, "pg-test") },
 };
 
+/** The same URL the app and `npm run worker` derive (lib/env.ts), so they all meet in one database. */
 export function databaseUrl(name: ClusterName, database: string): string {
-  return `postgres://postgres@127.0.0.1:${CLUSTERS[name].port}/${database}`;
+  return clusterDatabaseUrl(name, database);
 }
 
 const isRoot = process.getuid?.() === 0;

@@ -1,6 +1,7 @@
-import { Kysely, PostgresDialect } from "kysely";
+import { Kysely, PostgresDialect, type Transaction } from "kysely";
 import pg from "pg";
 import type { Database } from "./schema";
+import { databaseUrl } from "@/lib/env";
 
 export type { Database } from "./schema";
 /**
@@ -23,8 +24,9 @@ pg.types.setTypeParser(20, (v) => Number(v));
 // numeric (averages, rates from SQL) as a JS number too.
 pg.types.setTypeParser(1700, (v) => Number(v));
 
+/** DATABASE_URL, else the dev cluster exactly as `npm start` derives it (lib/env.ts). */
 export function defaultDatabaseUrl(): string {
-  return process.env.DATABASE_URL ?? "postgres://postgres@127.0.0.1:54320/echoline";
+  return databaseUrl();
 }
 
 export function createDb(connectionString = defaultDatabaseUrl(), max = 10): DB {
@@ -40,4 +42,15 @@ const globalForDb = globalThis as unknown as { echolineDb?: DB };
 export function getDb(): DB {
   globalForDb.echolineDb ??= createDb();
   return globalForDb.echolineDb;
+}
+
+/** A pool handle or a transaction: query modules take either. */
+export type Executor = DB | Transaction<Database>;
+
+/**
+ * Runs `fn` inside `db` when the caller already opened a transaction, else in a new one, so a
+ * function that needs atomicity can still join its caller's transaction (and the jobs sent in it).
+ */
+export function inTransaction<T>(db: Executor, fn: (trx: Transaction<Database>) => Promise<T>): Promise<T> {
+  return db.isTransaction ? fn(db as Transaction<Database>) : db.transaction().execute(fn);
 }

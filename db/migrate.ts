@@ -1,6 +1,7 @@
 import { Migrator, type Kysely, type MigrationProvider } from "kysely";
 import { migrations } from "../migrations";
 import { createDb } from "./index";
+import { installQueues } from "@/lib/jobs/registry";
 
 const provider: MigrationProvider = { getMigrations: async () => migrations };
 
@@ -18,6 +19,8 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   const db = createDb();
   try {
     await migrateToLatest(db as unknown as Kysely<unknown>);
+    // pg-boss's schema and every job queue (lib/jobs/registry.ts), so the app can send jobs at once.
+    await installQueues(db);
   } finally {
     await db.destroy();
   }

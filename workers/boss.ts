@@ -1,19 +1,17 @@
 import { PgBoss } from "pg-boss";
-import type { JobDefinition } from "./job-types";
+import { env } from "@/lib/env";
 
 /**
- * The worker's own pg-boss: its own small pool on the same PostgreSQL, so it can LISTEN for new
- * jobs and run pg-boss's maintenance. Several worker processes on one database are safe: pg-boss
- * claims each job with SKIP LOCKED, so a job runs in one process at a time.
+ * The worker's own pg-boss: its own small pool on the same PostgreSQL, so it can run pg-boss's
+ * maintenance. Several worker processes on one database are safe: pg-boss claims each job with
+ * SKIP LOCKED, so a job runs in one process at a time.
  */
 export function createWorkerBoss(connectionString: string, opts: { superviseIntervalSeconds?: number } = {}): PgBoss {
   // How often this instance looks for expired claims and lost heartbeats (pg-boss's default is 60 s).
   // Every worker supervises, and pg-boss lets one instance per interval do the pass, so 15 s costs
   // little and gets a dead worker's article back to work within ~45 s (heartbeat 30 s + 15 s).
   // ECHOLINE_WORKER_SUPERVISE_SECONDS is for tests that spawn workers and cannot wait that long.
-  const supervise = opts.superviseIntervalSeconds ?? Number(process.env.ECHOLINE_WORKER_SUPERVISE_SECONDS ?? 15);
-  if (!Number.isInteger(supervise) || supervise < 1)
-    throw new Error(`ECHOLINE_WORKER_SUPERVISE_SECONDS must be a whole number of seconds >= 1, not ${supervise}`);
+  const supervise = opts.superviseIntervalSeconds ?? env().ECHOLINE_WORKER_SUPERVISE_SECONDS;
   // Plain polling (every second, see workers/index.ts), not LISTEN/NOTIFY: jobs are sent through a
   // Kysely transaction by a sender that cannot notify, and a notify-enabled queue then falls back
   // to a slow backstop poll (measured: ~25 s between jobs).
@@ -30,18 +28,4 @@ export function createWorkerBoss(connectionString: string, opts: { superviseInte
     if (!/engine|node/i.test(w.message)) console.warn("[worker] pg-boss warning:", w.message);
   });
   return boss;
-}
-
-/** createQueue must come before send/work; racing processes may both try, which is harmless. */
-export async function ensureQueue(
-  boss: PgBoss,
-  job: Pick<JobDefinition, "name" | "preset">,
-  extra: { notify?: boolean } = {},
-): Promise<void> {
-  if (await boss.getQueue(job.name)) return;
-  try {
-    await boss.createQueue(job.name, { ...job.preset, ...extra });
-  } catch (err) {
-    if (!(await boss.getQueue(job.name))) throw err;
-  }
 }

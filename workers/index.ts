@@ -3,31 +3,28 @@
  * against one database. SIGTERM/SIGINT stop taking new jobs, wait a bounded time for the ones in
  * progress, close the mining thread and the database pool, and exit.
  */
-import type { Job, JobWithMetadata } from "pg-boss";
-import { createDb, defaultDatabaseUrl } from "@/db";
+import { createDb } from "@/db";
+import { databaseUrl, env } from "@/lib/env";
 import { getStorage } from "@/lib/storage";
 import { createIsolatedMiner } from "@/lib/mining/isolated";
-import { ensureMiningQueue, MINING_QUEUE, MINING_STOPPED_QUEUE, type MiningJobData } from "@/lib/corpus/queue";
-import { createWorkerBoss, ensureQueue } from "./boss";
-import { buildJobs } from "./jobs";
-import { miningPreset } from "./job-types";
+import { ensureQueues } from "@/lib/jobs/registry";
+import { mineArticle } from "@/lib/jobs/mining";
+import { miningPreset } from "@/lib/jobs/presets";
+import { createWorkerBoss } from "./boss";
+import { buildJobs, registerJobs } from "./jobs";
 
 // The supervisor of `npm start` (workers/stack.ts) sends SIGKILL 20 s after SIGTERM: finish within it.
 const STOP_GRACE_MS = 14_000;
 const STOP_DEADLINE_MS = 18_000;
 
-function secondsFromEnv(name: string): number | undefined {
-  const raw = process.env[name];
-  if (raw === undefined || raw === "") return undefined;
-  const n = Number(raw);
-  if (!Number.isFinite(n) || n <= 0) throw new Error(`${name} must be a positive number of seconds, not "${raw}"`);
-  return n;
-}
+// A wrong variable stops the worker here, with its name, before anything connects.
+const config = env();
 // The isolated miner's hard limit per document (default: the miner's own 60 s + 2 s).
-const hardTimeoutSeconds = secondsFromEnv("ECHOLINE_MINER_HARD_TIMEOUT_SECONDS");
-const testHooks = process.env.ECHOLINE_TEST_HOOKS === "1";
+const hardTimeoutSeconds = config.ECHOLINE_MINER_HARD_TIMEOUT_SECONDS;
+const testHooks = config.ECHOLINE_TEST_HOOKS === "1";
 
-const url = defaultDatabaseUrl();
+// Derived exactly as `npm start` derives it, so a worker in a second terminal joins the same database.
+const url = databaseUrl(config);
 const db = createDb(url, 4);
 const boss = createWorkerBoss(url);
 await boss.start();
@@ -44,58 +41,21 @@ const { mining, all } = buildJobs({
     createIsolatedMiner({ procedures, hardTimeoutMs: hardTimeoutSeconds ? hardTimeoutSeconds * 1000 : undefined }),
   // Lets a test kill a worker in the middle of a job: the handler never returns after `reading`.
   afterReading:
-    testHooks && process.env.ECHOLINE_TEST_WORKER_HANG_AFTER_READING === "1"
-      ? () => new Promise<void>(() => {})
-      : undefined,
-  onMined:
-    process.env.ECHOLINE_WORKER_TIMINGS === "1" ? (t) => console.log(`[timing] ${JSON.stringify(t)}`) : undefined,
+    testHooks && config.ECHOLINE_TEST_WORKER_HANG_AFTER_READING === "1" ? () => new Promise<void>(() => {}) : undefined,
+  onMined: config.ECHOLINE_WORKER_TIMINGS === "1" ? (t) => console.log(`[timing] ${JSON.stringify(t)}`) : undefined,
 });
 
-await ensureMiningQueue(boss, { preset: retry, reconcile: true });
+// Workers bring every queue to its preset (the mining one may be overridden by ECHOLINE_MINING_RETRY).
+await ensureQueues(boss, { reconcile: true, presets: { [mineArticle.name]: retry } });
 // ECHOLINE_WORKER_QUEUES=a,b runs only those queues (dedicated mining machines; the benchmark).
-const only = process.env.ECHOLINE_WORKER_QUEUES?.split(",")
+// Whoever mines also settles the mining jobs that died.
+const only = config.ECHOLINE_WORKER_QUEUES?.split(",")
   .map((s) => s.trim())
   .filter(Boolean);
-const selected = only?.length ? all.filter((j) => only.includes(j.name)) : all;
-if (selected.some((j) => j.name === MINING_QUEUE)) {
-  // Mining fetches two jobs at a time and keeps fetching while batches come back full: with one job
-  // per fetch, each article waited out a poll interval (measured: ~0.9 s idle per article).
-  await boss.work(
-    MINING_QUEUE,
-    {
-      localConcurrency: mining.concurrency ?? 1,
-      batchSize: 2,
-      burstWhenBatchFull: true,
-      perJobResults: true,
-      pollingIntervalSeconds: 1,
-    },
-    (jobs: Job<MiningJobData>[]) => mining.handler(jobs),
-  );
-  // Whoever mines also settles the mining jobs that died: their articles end `failed`.
-  await boss.work(
-    MINING_STOPPED_QUEUE,
-    { includeMetadata: true, pollingIntervalSeconds: 1 },
-    (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs),
-  );
-}
-for (const job of selected) {
-  if (job.name === MINING_QUEUE) continue;
-  await ensureQueue(boss, job);
-  const batch = job.batchSize ?? 1;
-  await boss.work(
-    job.name,
-    {
-      localConcurrency: job.concurrency ?? 1,
-      batchSize: batch,
-      burstWhenBatchFull: batch > 1,
-      perJobResults: true,
-      pollingIntervalSeconds: 1,
-    },
-    (jobs: Job<object>[]) => job.handler(jobs),
-  );
-  if (job.cron) await boss.schedule(job.name, job.cron, null, { ...job.preset });
-}
-console.log(`[worker] ready (pid ${process.pid}): ${selected.map((j) => j.name).join(", ")}`);
+if (only?.includes(mineArticle.name)) only.push(mineArticle.deadLetter!);
+const selected = only?.length ? all.filter((r) => only.includes(r.job.name)) : all;
+await registerJobs(boss, selected);
+console.log(`[worker] ready (pid ${process.pid}): ${selected.map((r) => r.job.name).join(", ")}`);
 
 let stopping = false;
 async function shutdown(signal: string) {

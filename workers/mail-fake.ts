@@ -15,6 +15,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { createHash, randomBytes, randomUUID, timingSafeEqual } from "node:crypto";
 import type { AddressInfo } from "node:net";
+import { env } from "@/lib/env";
 
 export type CapturedMail = {
   id: string;
@@ -134,11 +135,12 @@ export function startMailFake(opts: { smtpPort: number; httpPort: number; dir: s
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
-  const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
-  const httpPort = Number(process.env.MAIL_FAKE_HTTP_PORT ?? 2526);
-  const dir = process.env.MAIL_FAKE_DIR ?? path.resolve(import.meta.dirname, "..", ".data", "mail");
+  const e = env();
+  const smtpPort = e.SMTP_PORT;
+  const httpPort = e.MAIL_FAKE_HTTP_PORT;
+  const dir = e.MAIL_FAKE_DIR ?? path.resolve(import.meta.dirname, "..", ".data", "mail");
   // The process stack passes the token it gave the web server; started alone, make one up.
-  const token = process.env.MAIL_FAKE_TOKEN || randomBytes(24).toString("base64url");
+  const token = e.MAIL_FAKE_TOKEN || randomBytes(24).toString("base64url");
   const fake = startMailFake({ smtpPort, httpPort, dir, token });
   console.log(
     `[mail] fake SMTP on 127.0.0.1:${smtpPort}, captured mail at http://localhost:${httpPort}/?token=${token}`,

@@ -6,19 +6,20 @@
 import { sql, type Transaction } from "kysely";
 import type { Job, JobResult, JobWithMetadata, PgBoss } from "pg-boss";
 import { z } from "zod";
+import { env } from "@/lib/env";
 import type { Database, DB } from "@/db";
 import type { FileStorage } from "@/lib/storage";
 import { SuccessLine, ErrorLine } from "@/lib/mining/contract";
 import type { ProcedurePattern } from "@/lib/mining/procedures";
-import { MINING_QUEUE, type MiningJobData } from "@/lib/corpus/queue";
+import { mineArticle, type MiningJobData } from "@/lib/jobs/mining";
+import { resolveArticle } from "@/lib/jobs/graph";
+import { miningPreset, type RetryPreset } from "@/lib/jobs/presets";
 import type { ArticleStatus } from "@/db/schema/corpus";
 import { recordEvent } from "@/lib/corpus/events";
 import { replaceMinedRows } from "@/lib/corpus/store-mined";
 import { enabledProcedures } from "@/lib/corpus/procedures-store";
 import { documentMetaUpdate } from "@/lib/metadata/document";
 import { applyBatchMetadataByDoi } from "@/lib/corpus/batches";
-import { onArticleMined } from "./graph-jobs";
-import { miningPreset, type JobDefinition, type RetryPreset } from "./job-types";
 
 /**
  * What the worker needs of the extractor (lib/mining's createMiner and createIsolatedMiner return
@@ -50,7 +51,12 @@ export type MiningDeps = {
   onMined?: (t: { articleId: string; pages: number; readMs: number; mineMs: number; storeMs: number }) => void;
 };
 
-export type MiningJob = JobDefinition<MiningJobData> & {
+export type MiningJob = {
+  name: string;
+  preset: RetryPreset;
+  concurrency: number;
+  /** A batch of mining jobs (work with `perJobResults`): each article is settled on its own. */
+  handler(jobs: Job<MiningJobData>[]): Promise<JobResult[]>;
   /** Mines one article; resolves when it is done or failed, rejects only for a retryable error. */
   run(articleId: string, retryCount?: number): Promise<"done" | "failed" | "missing">;
   /**
@@ -212,7 +218,7 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
           failure_code: null,
           failure_message: null,
           mined_at: sql`now()`,
-          miner_version: process.env.ECHOLINE_MINER_VERSION ?? "1",
+          miner_version: env().ECHOLINE_MINER_VERSION,
           updated_at: sql`now()`,
         })
         .where("id", "=", articleId)
@@ -223,7 +229,8 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
         "done",
         `${line.statements.length} statements, ${line.citations.length} citations, ${line.references.length} references from ${line.pages} pages.`,
       );
-      await onArticleMined(deps.boss, trx, articleId);
+      // Follow-up graph work commits with the mined rows, or not at all.
+      await resolveArticle.send(trx, { articleId });
       if (deps.beforeCommit) await deps.beforeCommit(trx, articleId);
     });
     deps.onMined?.({
@@ -291,9 +298,9 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
   }
 
   return {
-    name: MINING_QUEUE,
+    name: mineArticle.name,
     preset: retry,
-    concurrency: Number(process.env.ECHOLINE_MINING_CONCURRENCY ?? 1),
+    concurrency: mineArticle.concurrencyNow(),
     // pg-boss hands a batch (work with `perJobResults`); each article is settled on its own, so one
     // retry never re-mines the others.
     handler: handleEach,
@@ -306,7 +313,7 @@ export function createMiningJob(deps: MiningDeps): MiningJob {
         }
         const { articleId } = parsed.data;
         // A re-mine sent since then owns the article now; its own outcome will be recorded.
-        const newer = (await deps.boss.findJobs<MiningJobData>(MINING_QUEUE, { key: articleId })).filter(
+        const newer = (await deps.boss.findJobs<MiningJobData>(mineArticle.name, { key: articleId })).filter(
           (j) => j.id !== job.sourceId && (j.state === "created" || j.state === "retry" || j.state === "active"),
         );
         if (newer.length) continue;

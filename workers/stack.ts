@@ -61,54 +61,142 @@ export function runBuild(env: NodeJS.ProcessEnv = process.env): Promise<void> {
   });
 }
 
-export type Stack = { children: ChildProcess[]; stop: () => Promise<void> };
+export type Stack = { children: Supervised[]; stop: () => Promise<void> };
 
-export async function startStack(cfg: StackConfig): Promise<Stack> {
-  const env = stackEnv(cfg);
-  const children: ChildProcess[] = [];
-  const start = (name: string, cmd: string, args: string[]) => {
-    const child = spawn(cmd, args, { cwd: ROOT, env, stdio: ["ignore", "pipe", "pipe"] });
-    const prefix = (chunk: Buffer) =>
-      chunk
-        .toString()
-        .split("\n")
-        .filter(Boolean)
-        .map((l) => (l.startsWith(`[${name}]`) ? l : `[${name}] ${l}`))
-        .join("\n") + "\n";
-    child.stdout?.on("data", (c: Buffer) => !cfg.quiet && process.stdout.write(prefix(c)));
-    child.stderr?.on("data", (c: Buffer) => process.stderr.write(prefix(c)));
-    child.on("exit", (code, signal) => {
-      if (!stopping && (code !== 0 || signal)) console.error(`[${name}] exited (${code ?? signal})`);
-    });
-    children.push(child);
-    return child;
-  };
+export type Backoff = { initialMs: number; maxMs: number; resetAfterMs: number };
+/** 1 s, doubling to 30 s while a process keeps dying; back to 1 s once it stayed up a minute. */
+export const RESTART_BACKOFF: Backoff = { initialMs: 1_000, maxMs: 30_000, resetAfterMs: 60_000 };
+
+export type Supervised = {
+  name: string;
+  /** The running child, or null between a death and its restart. */
+  current(): ChildProcess | null;
+  restarts(): number;
+  stop(): Promise<void>;
+};
+
+/** How each process of the stack is started (the healing test starts the worker the same way). */
+export const PROCESSES = {
+  mail: () => ({ cmd: process.execPath, args: ["--import", "tsx", "workers/mail-fake.ts"] }),
+  worker: () => ({ cmd: process.execPath, args: ["--import", "tsx", "workers/index.ts"] }),
+  web: (port: number) => ({ cmd: bin("next"), args: ["start", "-H", "127.0.0.1", "-p", String(port)] }),
+};
+
+/**
+ * Runs one child and restarts it whenever it dies, with backoff, saying so in the log. stop()
+ * ends it (SIGTERM, SIGKILL after 20 s) and cancels a pending restart. A Ctrl-C reaches the children
+ * too, but every restart waits at least `initialMs`, by which time the stack is stopping.
+ */
+export function superviseProcess(opts: {
+  name: string;
+  cmd: string;
+  args: string[];
+  env: NodeJS.ProcessEnv;
+  quiet?: boolean;
+  backoff?: Backoff;
+  /** Where the supervisor's own lines go (default: stderr). */
+  log?: (line: string) => void;
+  /** Every output chunk of the child, after prefixing (tests read the worker's "ready" line here). */
+  onOutput?: (text: string) => void;
+}): Supervised {
+  const backoff = opts.backoff ?? RESTART_BACKOFF;
+  const log = opts.log ?? ((l: string) => process.stderr.write(l + "\n"));
+  const { name } = opts;
+  let child: ChildProcess | null = null;
   let stopping = false;
-  start("mail", process.execPath, ["--import", "tsx", "workers/mail-fake.ts"]);
-  start("worker", process.execPath, ["--import", "tsx", "workers/index.ts"]);
-  start("web", bin("next"), ["start", "-H", "127.0.0.1", "-p", String(cfg.appPort)]);
-  await waitForHttp(`http://127.0.0.1:${cfg.appPort}/sign-in`, 90_000);
-  await waitForHttp(`http://127.0.0.1:${cfg.mailHttpPort}/messages`, 30_000);
-  return {
-    children,
-    stop: async () => {
-      stopping = true;
-      await Promise.all(
-        children.map(
-          (c) =>
-            new Promise<void>((resolve) => {
-              if (c.exitCode !== null || c.signalCode !== null) return resolve();
-              const t = setTimeout(() => c.kill("SIGKILL"), 20_000);
-              c.once("exit", () => {
-                clearTimeout(t);
-                resolve();
-              });
-              c.kill("SIGTERM");
-            }),
-        ),
+  let restarts = 0;
+  let delay = backoff.initialMs;
+  let timer: NodeJS.Timeout | null = null;
+
+  const prefix = (chunk: Buffer) =>
+    chunk
+      .toString()
+      .split("\n")
+      .filter(Boolean)
+      .map((l) => (l.startsWith(`[${name}]`) ? l : `[${name}] ${l}`))
+      .join("\n") + "\n";
+
+  const spawnOnce = () => {
+    const startedAt = Date.now();
+    const c = spawn(opts.cmd, opts.args, { cwd: ROOT, env: opts.env, stdio: ["ignore", "pipe", "pipe"] });
+    child = c;
+    c.stdout?.on("data", (chunk: Buffer) => {
+      const text = prefix(chunk);
+      opts.onOutput?.(text);
+      if (!opts.quiet) process.stdout.write(text);
+    });
+    c.stderr?.on("data", (chunk: Buffer) => {
+      const text = prefix(chunk);
+      opts.onOutput?.(text);
+      process.stderr.write(text);
+    });
+    c.on("error", (err) => log(`[stack] ${name} could not be started: ${err.message}`));
+    c.on("exit", (code, signal) => {
+      if (child === c) child = null;
+      if (stopping) return;
+      const upMs = Date.now() - startedAt;
+      if (upMs >= backoff.resetAfterMs) delay = backoff.initialMs;
+      log(
+        `[stack] ${name} exited (${signal ?? `code ${code}`}) after ${(upMs / 1000).toFixed(1)} s; restarting in ${(delay / 1000).toFixed(0)} s`,
       );
+      const wait = delay;
+      delay = Math.min(delay * 2, backoff.maxMs);
+      timer = setTimeout(() => {
+        timer = null;
+        if (stopping) return;
+        restarts++;
+        spawnOnce();
+        log(`[stack] ${name} restarted (pid ${child?.pid}, restart ${restarts})`);
+      }, wait);
+    });
+  };
+  spawnOnce();
+
+  return {
+    name,
+    current: () => child,
+    restarts: () => restarts,
+    stop: () => {
+      stopping = true;
+      if (timer) clearTimeout(timer);
+      const c = child;
+      if (!c || c.exitCode !== null || c.signalCode !== null) return Promise.resolve();
+      return new Promise<void>((resolve) => {
+        const t = setTimeout(() => c.kill("SIGKILL"), 20_000);
+        c.once("exit", () => {
+          clearTimeout(t);
+          resolve();
+        });
+        c.kill("SIGTERM");
+      });
     },
   };
+}
+
+/**
+ * Starts the three processes and resolves once the web server and the mail fake answer. `spawned`
+ * gets the stack at once, so a Ctrl-C during start-up can stop the children (and their restarts).
+ */
+export async function startStack(cfg: StackConfig, spawned?: (stack: Stack) => void): Promise<Stack> {
+  const env = stackEnv(cfg);
+  const children: Supervised[] = [];
+  const start = (name: string, p: { cmd: string; args: string[] }) =>
+    children.push(superviseProcess({ name, ...p, env, quiet: cfg.quiet }));
+  start("mail", PROCESSES.mail());
+  start("worker", PROCESSES.worker());
+  start("web", PROCESSES.web(cfg.appPort));
+  const stop = async () => {
+    await Promise.all(children.map((c) => c.stop()));
+  };
+  spawned?.({ children, stop });
+  try {
+    await waitForHttp(`http://127.0.0.1:${cfg.appPort}/sign-in`, 90_000);
+    await waitForHttp(`http://127.0.0.1:${cfg.mailHttpPort}/messages`, 30_000);
+  } catch (err) {
+    await stop();
+    throw err;
+  }
+  return { children, stop };
 }
 
 export async function waitForHttp(url: string, timeoutMs: number): Promise<void> {

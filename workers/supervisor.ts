@@ -1,25 +1,39 @@
 /**
- * `npm start`: PostgreSQL (private cluster), migrations, seed, build, then the mail fake, the worker
- * and the web server, all on loopback. Ctrl-C stops every one of them, PostgreSQL last.
+ * `npm start`: PostgreSQL (private cluster), migrations, seed, job queues, build, then the mail fake,
+ * the worker and the web server, all on loopback. A child that dies is restarted with backoff
+ * (workers/stack.ts). Ctrl-C stops every one of them, PostgreSQL last.
  */
 import type { Kysely } from "kysely";
 import path from "node:path";
-import { up, down, ensureDatabase, databaseUrl, DATA_DIR } from "@/db/cluster";
+import { up, down, ensureDatabase, DATA_DIR } from "@/db/cluster";
 import { createDb } from "@/db";
 import { migrateToLatest } from "@/db/migrate";
 import { seedAll } from "@/db/seed";
 import { startStack, runBuild, stackEnv, type Stack } from "./stack";
 import { loadDemoCorpus } from "@/lib/demo/load";
-import { senderFor } from "@/lib/corpus/queue";
+import { installQueues } from "@/lib/jobs/registry";
+import { clusterDatabaseUrl, env, EnvError } from "@/lib/env";
 
 const t0 = Date.now();
+let config;
+try {
+  config = env();
+} catch (err) {
+  console.error(`[echoline] could not start: ${err instanceof EnvError ? err.message : String(err)}`);
+  process.exit(1);
+}
 const cfg = {
-  appPort: Number(process.env.PORT ?? 3000),
-  smtpPort: Number(process.env.SMTP_PORT ?? 2525),
-  mailHttpPort: Number(process.env.MAIL_FAKE_HTTP_PORT ?? 2526),
-  databaseUrl: databaseUrl("dev", "echoline"),
+  appPort: config.PORT,
+  smtpPort: config.SMTP_PORT,
+  mailHttpPort: config.MAIL_FAKE_HTTP_PORT,
+  // The same URL `npm run worker` derives when DATABASE_URL is unset (lib/env.ts databaseUrl).
+  databaseUrl: clusterDatabaseUrl("dev", "echoline", config),
   dataDir: DATA_DIR,
 };
+if (config.DATABASE_URL && config.DATABASE_URL !== cfg.databaseUrl)
+  console.warn(
+    `[echoline] DATABASE_URL is set but npm start runs its own cluster (${cfg.databaseUrl}); unset it so a worker in another terminal joins this one.`,
+  );
 
 let stack: Stack | null = null;
 let stopping = false;
@@ -41,14 +55,16 @@ try {
   const db = createDb(cfg.databaseUrl, 2);
   await migrateToLatest(db as unknown as Kysely<unknown>);
   await seedAll(db);
+  // Queues before any process sends a job (the web app and the demo loader only send).
+  await installQueues(db);
   await db.destroy();
-  if (process.env.ECHOLINE_SKIP_BUILD !== "1") await runBuild(process.env);
-  stack = await startStack(cfg);
+  if (config.ECHOLINE_SKIP_BUILD !== "1") await runBuild(process.env);
+  stack = await startStack(cfg, (s) => (stack = s));
   console.log(
     `\n[echoline] ready in ${((Date.now() - t0) / 1000).toFixed(1)} s at http://localhost:${cfg.appPort}  (mail fake: http://localhost:${cfg.mailHttpPort}/, data: ${path.relative(process.cwd(), DATA_DIR)}/)`,
   );
   console.log("[echoline] demo accounts are listed in README.md; Ctrl-C stops everything.");
-  if (process.env.ECHOLINE_DEMO !== "0") {
+  if (config.ECHOLINE_DEMO !== "0") {
     // Through the real pipeline: the files are ingested and the worker mines them in the background.
     const demoDb = createDb(cfg.databaseUrl, 2);
     loadDemoCorpus(demoDb, { cacheDir: path.join(DATA_DIR, "demo"), log: (s) => console.log(`[demo] ${s}`) })
@@ -58,11 +74,7 @@ try {
         ),
       )
       .catch((err) => console.error("[demo] could not load the demo corpus:", err instanceof Error ? err.message : err))
-      // The loader's job sender polls through this handle: stop it before closing the pool.
-      .finally(async () => {
-        await (await senderFor(demoDb).catch(() => null))?.stop({ graceful: false, close: false }).catch(() => {});
-        await demoDb.destroy();
-      });
+      .finally(() => demoDb.destroy());
   }
 } catch (err) {
   console.error("[echoline] could not start:", err instanceof Error ? err.message : err);

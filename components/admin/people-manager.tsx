@@ -38,6 +38,14 @@ export function PeopleManager({ selfId }: { selfId: string }) {
     },
     onError: (e) => setErrors(formErrorsOf(e)),
   });
+  const resend = useMutation({
+    mutationFn: (u: User) => fetchJson(`/api/admin/users/${u.id}/invitation`, { method: "POST" }),
+    onSuccess: (_d, u) => {
+      setRowError(undefined);
+      setSent(u.email);
+    },
+    onError: (e) => setRowError(e.message),
+  });
   const patch = useMutation({
     mutationFn: ({ id, body }: { id: string; body: unknown }) =>
       fetchJson(`/api/admin/users/${id}`, { method: "PATCH", json: body }),
@@ -170,6 +178,11 @@ export function PeopleManager({ selfId }: { selfId: string }) {
                   </td>
                   <td>{u.active ? (u.invitationPending ? "Invited" : "Active") : "Deactivated"}</td>
                   <td className="text-right">
+                    {u.active && u.invitationPending && (
+                      <Button variant="quiet" disabled={resend.isPending} onClick={() => resend.mutate(u)}>
+                        Resend invitation
+                      </Button>
+                    )}{" "}
                     {u.id !== selfId && (
                       <Button
                         variant={u.active ? "danger" : "quiet"}

@@ -75,6 +75,48 @@ export async function createInvitation(
   return { userId: user.id, token };
 }
 
+/**
+ * A new token and seven more days for a person's unaccepted invitation (the old link stops working).
+ * Null when the person has no invitation waiting; `accepted` when they already chose a password.
+ */
+export async function renewInvitation(
+  trx: DB,
+  input: { userId: string; renewedBy: string | null },
+): Promise<{ token: string; email: string; role: Role } | "accepted" | "deactivated" | null> {
+  const user = await trx
+    .selectFrom("User")
+    .select(["email", "role", "deactivated_at"])
+    .where("id", "=", input.userId)
+    .executeTakeFirst();
+  if (!user) return null;
+  if (user.deactivated_at) return "deactivated";
+  const inv = await trx
+    .selectFrom("invitations")
+    .select(["id", "accepted_at"])
+    .where("user_id", "=", input.userId)
+    .orderBy("created_at", "desc")
+    .forUpdate()
+    .executeTakeFirst();
+  if (!inv) return null;
+  if (inv.accepted_at) return "accepted";
+  const token = randomBytes(24).toString("base64url");
+  await trx
+    .updateTable("invitations")
+    .set({ token_hash: sha256(token), expires_at: sql<Date>`now() + interval '7 days'` as never })
+    .where("id", "=", inv.id)
+    .execute();
+  await trx
+    .insertInto("audit_log")
+    .values({
+      actor_id: input.renewedBy,
+      action: "resend_invitation",
+      target: input.userId,
+      detail: JSON.stringify({ email: user.email }),
+    })
+    .execute();
+  return { token, email: user.email, role: user.role };
+}
+
 export async function findInvitation(db: DB, token: string) {
   return db
     .selectFrom("invitations")

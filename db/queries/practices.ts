@@ -39,7 +39,7 @@ export async function createPractice(
     comparator: Comparator;
     value: number;
     framing: Framing | null;
-    createdBy: string;
+    createdBy: string | null;
   },
 ) {
   return db

@@ -1,6 +1,6 @@
 import type { DB } from "@/db";
 import type { ArticleStatus } from "@/lib/vocabulary";
-import { MINING_QUEUE } from "./queue";
+import { mineArticle } from "@/lib/jobs/mining";
 
 /** Every status change of an article is also a row of job_events: the article's history. */
 export async function recordEvent(
@@ -9,5 +9,8 @@ export async function recordEvent(
   state: ArticleStatus | "retry",
   message: string | null,
 ): Promise<void> {
-  await db.insertInto("job_events").values({ article_id: articleId, job_name: MINING_QUEUE, state, message }).execute();
+  await db
+    .insertInto("job_events")
+    .values({ article_id: articleId, job_name: mineArticle.name, state, message })
+    .execute();
 }

@@ -7,7 +7,7 @@ import { sql } from "kysely";
 import { requireTransaction, type DB } from "@/db";
 import type { FileStorage } from "@/lib/storage";
 import { detectKind } from "./detect";
-import { enqueueMining, senderFor } from "./queue";
+import { mineArticle } from "@/lib/jobs/mining";
 import { recordEvent } from "./events";
 import { normaliseDoi } from "./doi";
 
@@ -46,12 +46,12 @@ export function sha256Hex(data: Uint8Array): string {
 }
 
 /**
- * Runs inside the caller's transaction (`boss` from `senderFor(db)` on the pool handle), so the
- * article, its events and its mining job commit together, with whatever else the caller writes.
+ * Runs inside the caller's transaction, so the article, its events and its mining job commit
+ * together, with whatever else the caller writes. The queues must exist (`installQueues(db)` once
+ * per handle: migrate, `npm start` and the upload route do it).
  */
 export async function ingestFile(
   trx: DB,
-  boss: Awaited<ReturnType<typeof senderFor>>,
   storage: FileStorage,
   input: IngestInput,
 ): Promise<{ articleId: string; duplicate: boolean }> {
@@ -102,7 +102,7 @@ export async function ingestFile(
       return { articleId: existing.id, duplicate: true };
     }
     await recordEvent(trx, inserted.id, "uploaded", null);
-    await queueArticle(trx, boss, inserted.id, "upload");
+    await queueArticle(trx, inserted.id, "upload");
     if (input.batchId) {
       await trx
         .updateTable("upload_batches")
@@ -126,13 +126,8 @@ export async function ingestFile(
 }
 
 /** Marks an article queued and sends its mining job, inside the caller's transaction. */
-export async function queueArticle(
-  trx: DB,
-  boss: Awaited<ReturnType<typeof senderFor>>,
-  articleId: string,
-  reason: "upload" | "remine",
-): Promise<boolean> {
-  const jobId = await enqueueMining(boss, trx, { articleId, reason });
+export async function queueArticle(trx: DB, articleId: string, reason: "upload" | "remine"): Promise<boolean> {
+  const jobId = await mineArticle.send(trx, { articleId, reason });
   if (!jobId) return false;
   await trx
     .updateTable("articles")

@@ -9,7 +9,7 @@ import path from "node:path";
 import { sql } from "kysely";
 import type { DB } from "@/db";
 import { IngestError, ingestFile, sha256Hex } from "@/lib/corpus/ingest";
-import { senderFor } from "@/lib/corpus/queue";
+import { installQueues } from "@/lib/jobs/registry";
 import { getStorage, type FileStorage } from "@/lib/storage";
 import { DEFAULT_COUNT, DEFAULT_SEED, generateCorpus, type DemoVenue } from "./corpus";
 import { pdfFilename, pdfAuthor, renderArticlePdf } from "./render";
@@ -76,7 +76,7 @@ export async function loadDemoCorpus(
   const dir = opts.cacheDir ?? path.join(process.cwd(), ".data", "demo", `v${DEMO_GENERATOR_VERSION}-seed${seed}`);
   await mkdir(dir, { recursive: true });
   const venueIds = await ensureDemoVenues(db, corpus.venues);
-  const boss = await senderFor(db);
+  await installQueues(db);
 
   let created = 0;
   let skipped = 0;
@@ -105,7 +105,7 @@ export async function loadDemoCorpus(
     }
     try {
       const r = await db.transaction().execute((trx) =>
-        ingestFile(trx, boss, storage, {
+        ingestFile(trx, storage, {
           data,
           filename,
           metadata: {

@@ -1,10 +1,12 @@
-import type { DB } from "@/db";
-// eslint-disable-next-line boundaries/dependencies -- TODO(lead): remove after jobs/screens merge (the job registry moves to lib/)
-import { enqueueGraph, GRAPH_QUEUES, trailsOnce } from "@/workers/graph-jobs";
+import type { Executor } from "@/db";
+import { buildTrails, trailsOnce } from "@/lib/jobs/graph";
 
-/** After a merge, split or retyping, any practice's trails may change: queue a rebuild of each. */
-export async function rebuildAllSoon(db: DB): Promise<void> {
+/**
+ * After a merge, split or retyping, any practice's trails may change: queue a rebuild of each, in
+ * the caller's transaction so the rebuilds commit with the change that needs them.
+ */
+export async function rebuildAllSoon(db: Executor): Promise<void> {
   for (const p of await db.selectFrom("practices").select("id").execute()) {
-    await enqueueGraph(GRAPH_QUEUES.trails, { practiceId: p.id }, trailsOnce(p.id, 5));
+    await buildTrails.send(db, { practiceId: p.id }, trailsOnce(p.id, 5));
   }
 }

@@ -1,5 +1,5 @@
 import { sql } from "kysely";
-import type { DB } from "@/db";
+import type { Executor } from "@/db";
 import type { SourceCheckVerdict } from "@/lib/vocabulary";
 
 export interface SourceCheckInput {
@@ -13,7 +13,7 @@ export interface SourceCheckInput {
 }
 
 /** One check per (work, practice): a new record replaces the old one. Null when work or practice is missing. */
-export async function recordSourceCheck(db: DB, c: SourceCheckInput): Promise<{ id: string } | null> {
+export async function recordSourceCheck(db: Executor, c: SourceCheckInput): Promise<{ id: string } | null> {
   const [w, p] = await Promise.all([
     db.selectFrom("works").select("id").where("id", "=", c.workId).where("merged_into", "is", null).executeTakeFirst(),
     db.selectFrom("practices").select("id").where("id", "=", c.practiceId).executeTakeFirst(),

@@ -2,6 +2,7 @@
 // one warm miner, one document at a time.
 import { parentPort, workerData } from "node:worker_threads";
 import { createMiner } from "./index";
+import { env } from "../env";
 import { type ThreadData, type ThreadRequest, TEST_HANG_FILENAME, TEST_OOM_FILENAME } from "./isolated";
 
 // One page with one line of Helvetica; the cross-reference table is left out on purpose (pdf.js
@@ -22,7 +23,7 @@ const data = workerData as Partial<ThreadData> | null;
 if (parentPort && data?.echolineMiner === true) {
   const port = parentPort;
   const miner = createMiner(data.options ?? {});
-  const hooks = process.env.ECHOLINE_TEST_HOOKS === "1";
+  const hooks = env().ECHOLINE_TEST_HOOKS === "1";
   port.on("message", async (req: ThreadRequest) => {
     if (hooks && req.filename === TEST_HANG_FILENAME) {
       // A tight loop, like pdf.js stuck in a damaged content stream: no timer in this thread can fire.

@@ -15,8 +15,8 @@ import { getDb } from "@/db";
 import { recordUsedSignInLink, userByEmail } from "@/db/queries/accounts";
 import { verifyPassword, DUMMY_HASH } from "./passwords";
 import { checkRateLimit, recordAttempt } from "./rate-limit";
-import { mailTransport, MAIL_FROM, appUrl } from "./mail";
-import { signInEmail } from "./mail-templates";
+import { appUrl, env, smtpSettings } from "@/lib/env";
+import { sendMail } from "@/lib/jobs/mail";
 
 class RateLimited extends CredentialsSignin {
   code = "rate_limited";
@@ -24,7 +24,7 @@ class RateLimited extends CredentialsSignin {
 
 export function hashLinkToken(token: string): string {
   // next-auth stores sha256(token + secret) in VerificationToken.
-  return createHash("sha256").update(`${token}${process.env.AUTH_SECRET}`).digest("hex");
+  return createHash("sha256").update(`${token}${env().AUTH_SECRET}`).digest("hex");
 }
 
 function adapter(): Adapter {
@@ -58,12 +58,13 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in/problem" },
   providers: [
     Nodemailer({
+      // The provider wants a server, but never uses it: sendVerificationRequest below queues a mail job.
       server: {
-        host: process.env.SMTP_HOST ?? "127.0.0.1",
-        port: Number(process.env.SMTP_PORT ?? 2525),
-        auth: { user: "echoline", pass: "local" },
+        host: smtpSettings().host,
+        port: smtpSettings().port,
+        auth: { user: smtpSettings().user, pass: smtpSettings().password },
       },
-      from: MAIL_FROM,
+      from: smtpSettings().from,
       maxAge: 24 * 60 * 60,
       async sendVerificationRequest({ identifier, url }) {
         // Same answer for unknown or deactivated addresses; only invited, active people get a link.
@@ -73,7 +74,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
         // before handing over to next-auth's callback.
         const u = new URL(url);
         const link = `${appUrl()}/sign-in/link?${u.searchParams.toString()}`;
-        await mailTransport().sendMail({ from: MAIL_FROM, to: identifier, ...signInEmail(link) });
+        // A mail job (retried while SMTP is down); next-auth has already stored the token.
+        await sendMail.send(getDb(), { template: "sign-in", to: identifier, link });
       },
     }),
     Credentials({

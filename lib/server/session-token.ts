@@ -14,11 +14,12 @@
  */
 import { decode, getToken } from "next-auth/jwt";
 import { LRUCache } from "lru-cache";
+import { env } from "@/lib/env";
 
 export const SESSION_COOKIE = "authjs.session-token";
 
 /** next-auth prefixes the cookie with __Secure- when the site is served over https. */
-export function usesSecureCookie(forwardedProto: string | null, authUrl = process.env.AUTH_URL ?? ""): boolean {
+export function usesSecureCookie(forwardedProto: string | null, authUrl = env().AUTH_URL ?? ""): boolean {
   const proto =
     forwardedProto?.split(",")[0]?.trim() || (authUrl ? new URL(authUrl).protocol.replace(":", "") : "http");
   return proto === "https";
@@ -30,7 +31,7 @@ export function usesSecureCookie(forwardedProto: string | null, authUrl = proces
  */
 export async function sessionUserId(cookie: string | null, forwardedProto: string | null): Promise<string | null> {
   if (!cookie || !cookie.includes(SESSION_COOKIE)) return null;
-  const secret = process.env.AUTH_SECRET;
+  const secret = env().AUTH_SECRET;
   if (!secret) throw new Error("AUTH_SECRET is not set");
   const secureCookie = usesSecureCookie(forwardedProto);
   const req = { headers: new Headers({ cookie }) };

@@ -6,6 +6,7 @@
 import fs from "node:fs/promises";
 import path from "node:path";
 import { randomBytes } from "node:crypto";
+import { filesDir } from "@/lib/env";
 
 export interface FileStorage {
   /** Stores the bytes under their hash and returns the key to read them back with. Idempotent. */
@@ -79,10 +80,7 @@ export function getStorage(): FileStorage {
   return defaultStorage;
 }
 
-/** The folder getStorage() uses (the backup script copies it). */
-export function storageDir(env: NodeJS.ProcessEnv = process.env): string {
-  return path.resolve(
-    env.ECHOLINE_FILES_DIR ??
-      (env.ECHOLINE_DATA_DIR ? path.join(env.ECHOLINE_DATA_DIR, "files") : path.join(process.cwd(), ".data", "files")),
-  );
+/** The folder getStorage() uses (the backup script copies it): lib/env's filesDir(), else .data/files. */
+export function storageDir(): string {
+  return path.resolve(filesDir() ?? path.join(process.cwd(), ".data", "files"));
 }

@@ -47,6 +47,12 @@ export const coreRows: MatrixRow[] = [
     body: {},
   },
   {
+    file: "app/api/admin/users/[id]/invitation/route.ts",
+    path: `/api/admin/users/${SAMPLE_ID}/invitation`,
+    method: "POST",
+    allow: ["admin"],
+  },
+  {
     file: "app/api/admin/invitations/route.ts",
     path: "/api/admin/invitations",
     method: "POST",

@@ -21,7 +21,7 @@ import { prepareTemplate } from "@/tests/setup/db-global";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { folderStorage } from "@/lib/storage";
 import { ingest } from "../helpers/ingest";
-import { senderFor } from "@/lib/corpus/queue";
+import { installQueues } from "@/lib/jobs/registry";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { createMiner } from "@/lib/mining";
 import { generateCorpus } from "@/lib/demo/corpus";
@@ -145,7 +145,7 @@ async function pipeline(files: string[], pages: number, workers: number) {
   await seedProcedures(t.db);
   const filesDir = path.join(work, `files-${workers}-${Date.now()}`);
   const storage = folderStorage(filesDir);
-  await senderFor(t.db);
+  await installQueues(t.db);
   const ws = await Promise.all(Array.from({ length: workers }, () => startWorker(t.url, filesDir)));
   // A ready worker that has mined nothing yet: the idle baseline (tsx, pg-boss, Kysely, the miner's modules).
   const idleMb = Math.max(...ws.map((w) => w.rssKb())) / 1024;

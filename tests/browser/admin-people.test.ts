@@ -46,6 +46,33 @@ describe("admin: invite, change role, deactivate", () => {
     await expect(b.page.getByTestId("who").textContent()).resolves.toContain("Curator");
   });
 
+  it("resends an invitation: a fresh link arrives and the first one stops working", async () => {
+    const other = "second.invitee@echoline.local";
+    await signInAs(b.page, "admin");
+    await b.page.goto(`${APP_URL}/admin/people`);
+    const t1 = Date.now();
+    await b.page.getByLabel("E-mail", { exact: true }).fill(other);
+    await b.page.getByRole("button", { name: "Send invitation" }).click();
+    const first = (await waitForMail(other, t1)).text.match(/\/invite\/(\S+)/)?.[1];
+    const t2 = Date.now();
+    await b.page.getByTestId(`person-${other}`).getByRole("button", { name: "Resend invitation" }).click();
+    const second = (await waitForMail(other, t2)).text.match(/\/invite\/(\S+)/)?.[1];
+    expect(first).toBeTruthy();
+    expect(second).toBeTruthy();
+    expect(second).not.toBe(first);
+    const old = await fetch(`${APP_URL}/api/invitations/accept`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({
+        token: first,
+        name: "Nobody",
+        password: "a-long-enough-password",
+        confirm: "a-long-enough-password",
+      }),
+    });
+    expect(old.status).toBe(404);
+  });
+
   it("changes the role, which takes effect at once, and deactivates", async () => {
     await signInAs(b.page, "admin");
     await b.page.goto(`${APP_URL}/admin/people`);

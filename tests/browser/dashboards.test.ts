@@ -19,7 +19,7 @@ let only: string;
 beforeAll(async () => {
   db = createDb(E2E_DATABASE_URL, 2);
   ids = await loadFixture(db);
-  const deps: GraphJobDeps = { db: () => db, send: async () => undefined };
+  const deps: GraphJobDeps = { db, send: async () => undefined };
   for (const k of ["M", "A1", "A2", "A3", "A4"]) await handleResolve(deps, { articleId: ids.articles[k] });
   await db.transaction().execute((trx) => rebuildAllTrails(trx));
   await refreshSummaries(db);

@@ -16,7 +16,6 @@ import { createTestDatabase } from "@/tests/helpers/db";
 import { databaseUrl, findBinDir } from "@/db/cluster";
 import { folderStorage } from "@/lib/storage";
 import { ingest } from "../helpers/ingest";
-import { senderFor } from "@/lib/corpus/queue";
 import { goodPdf } from "@/tests/integration/mining/fixtures";
 import type { DB } from "@/db";
 
@@ -127,8 +126,6 @@ async function putRows(db: DB) {
       })),
     )
     .execute();
-  // The sender polls through this handle; stop it so nothing changes between snapshot and dump.
-  await (await senderFor(db)).stop({ graceful: false, close: false });
 }
 
 beforeAll(async () => {

@@ -7,6 +7,7 @@ import pg from "pg";
 import { up, databaseUrl } from "@/db/cluster";
 import { createDb } from "@/db";
 import { migrateToLatest } from "@/db/migrate";
+import { installQueues } from "@/lib/jobs/registry";
 
 export const TEMPLATE = "echoline_template";
 
@@ -24,6 +25,9 @@ export async function prepareTemplate(): Promise<void> {
   const db = createDb(databaseUrl("test", TEMPLATE), 2);
   try {
     await migrateToLatest(db as unknown as Kysely<unknown>);
+    // pg-boss's schema and the job queues, as `npm run db:migrate` installs them: every suite's
+    // clone can send jobs at once.
+    await installQueues(db);
   } finally {
     await db.destroy();
   }

@@ -1,10 +1,10 @@
 import { route } from "@/lib/server/request";
 import { getDb } from "@/db";
 import { HttpError, isUniqueViolation } from "@/lib/server/errors";
-import { STATISTIC_KEYS, practiceId as practiceKey, practiceLabel } from "@/lib/practices";
+import { STATISTIC_KEYS } from "@/lib/practices";
 import { practiceFormSchema } from "@/lib/graph/practice-form";
-import { createPractice, listPractices } from "@/db/queries/practices";
-import { enqueueGraph, GRAPH_QUEUES } from "@/workers/graph-jobs";
+import { listPractices } from "@/db/queries/practices";
+import { createPractice } from "@/lib/graph/create-practice";
 
 export const GET = route({ permission: "corpus:read" }, async () => ({
   practices: await listPractices(getDb()),
@@ -12,21 +12,10 @@ export const GET = route({ permission: "corpus:read" }, async () => ({
 }));
 
 export const POST = route({ permission: "practices:manage", body: practiceFormSchema }, async ({ body, actor }) => {
-  const p = {
-    statistic: body.statistic,
-    comparator: body.comparator,
-    value: body.value,
-    framing: body.framing ?? null,
-  };
   try {
-    const row = await createPractice(getDb(), {
-      key: practiceKey(p),
-      label: body.label?.trim() || practiceLabel(p),
-      ...p,
-      createdBy: actor.id,
-    });
-    await enqueueGraph(GRAPH_QUEUES.matchPractice, { practiceId: row.id });
-    return row;
+    return await getDb()
+      .transaction()
+      .execute((trx) => createPractice(trx, body, actor.id));
   } catch (err) {
     if (isUniqueViolation(err)) throw new HttpError(409, "conflict", "That practice is already tracked.", "value");
     throw err;

@@ -3,7 +3,7 @@ import { redirect } from "next/navigation";
 import { getDb } from "@/db";
 import { signInLinkState } from "@/db/queries/accounts";
 import { hashLinkToken } from "@/lib/server/auth";
-import { appUrl } from "@/lib/server/mail";
+import { appUrl } from "@/lib/env";
 
 export const metadata = { title: "Sign-in link" };
 

@@ -4,7 +4,8 @@ import { createTestDatabase } from "@/tests/helpers/db";
 import type { DB } from "@/db";
 import { loadFixture } from "./fixture";
 import { seedPractices } from "@/lib/graph/seed";
-import { handleResolve, GRAPH_QUEUES, type GraphJobDeps } from "@/workers/graph-jobs";
+import { handleResolve, type GraphJobDeps } from "@/workers/graph-jobs";
+import { resolveArticle } from "@/lib/jobs/graph";
 import { rebuildAllTrails } from "@/lib/graph/trails";
 import { refreshSummaries } from "@/lib/graph/summaries";
 import { recordSourceCheck } from "@/lib/graph/source-checks";
@@ -32,11 +33,14 @@ beforeAll(async () => {
       .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
       .executeTakeFirstOrThrow()
   ).id;
-  const deps: GraphJobDeps = { db: () => db, send: async (name, data) => void sent.push({ name, data }) };
+  const deps: GraphJobDeps = {
+    db,
+    send: async (job, data) => void sent.push({ name: job.name, data: data as object }),
+  };
   // Mining order M, A2, A1: A2 cites A1 before A1 is in the corpus.
   for (const k of ["M", "A2", "A1", "A3", "A4", "A5", "A6"]) await handleResolve(deps, { articleId: ids.articles[k] });
   // The re-checks the jobs asked for, as the worker would run them.
-  for (const s of sent.filter((x) => x.name === GRAPH_QUEUES.resolve))
+  for (const s of sent.filter((x) => x.name === resolveArticle.name))
     await handleResolve(deps, s.data as { articleId: string; recheck: boolean });
   const mWork = await db
     .selectFrom("works")
@@ -82,7 +86,7 @@ describe("reference resolution over the fixture", () => {
   it("re-runs for A2 when A1 arrives, and A2's reference now leads to A1", async () => {
     expect(
       sent.some(
-        (s) => s.name === GRAPH_QUEUES.resolve && (s.data as { articleId: string }).articleId === ids.articles.A2,
+        (s) => s.name === resolveArticle.name && (s.data as { articleId: string }).articleId === ids.articles.A2,
       ),
     ).toBe(true);
     const r = await db
@@ -340,7 +344,7 @@ describe("curator merge and split", () => {
       .executeTakeFirstOrThrow();
     expect(ref.work_id).toBe(a1Work.id);
     const split = await db.transaction().execute((trx) => splitWork(trx, a1Work.id, [ref.id]));
-    const deps: GraphJobDeps = { db: () => db, send: async () => {} };
+    const deps: GraphJobDeps = { db, send: async () => {} };
     await handleResolve(deps, { articleId: ids.articles.A2, recheck: true });
     const after = await db
       .selectFrom("references")

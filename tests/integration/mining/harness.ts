@@ -8,20 +8,14 @@ import { createTestDatabase } from "@/tests/helpers/db";
 import { memoryStorage, type FileStorage } from "@/lib/storage";
 import { createMiner } from "@/lib/mining";
 import { createIsolatedMiner, type IsolatedMinerOptions } from "@/lib/mining/isolated";
-import {
-  ensureMiningQueue,
-  MINING_QUEUE,
-  MINING_STOPPED_QUEUE,
-  senderFor,
-  type MiningJobData,
-} from "@/lib/corpus/queue";
+import { ensureQueues } from "@/lib/jobs/registry";
+import { mineArticle, mineArticleStopped } from "@/lib/jobs/mining";
 import { queueArticle, sha256Hex } from "@/lib/corpus/ingest";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { createWorkerBoss } from "@/workers/boss";
-import { buildJobs } from "@/workers/jobs";
+import { buildJobs, registerJobs } from "@/workers/jobs";
 import type { MiningDeps, MiningJob } from "@/workers/mining-job";
-import type { RetryPreset } from "@/workers/job-types";
-import type { JobWithMetadata } from "pg-boss";
+import type { RetryPreset } from "@/lib/jobs/presets";
 import type { DB } from "@/db";
 import type { SourceKind } from "@/db/schema/corpus";
 
@@ -61,11 +55,11 @@ export async function startHarness(
   };
   const boss = createWorkerBoss(t.url, { superviseIntervalSeconds: 1 });
   await boss.start();
-  await ensureMiningQueue(boss, { preset: opts.retry, reconcile: true });
+  await ensureQueues(boss, { reconcile: true, presets: opts.retry ? { [mineArticle.name]: opts.retry } : {} });
   const errors: unknown[] = [];
   const quietLog = { info: () => {}, warn: () => {}, error: (...a: unknown[]) => errors.push(a) };
   const isolated = opts.isolated;
-  const { mining } = buildJobs({
+  const { mining, all } = buildJobs({
     db: t.db,
     storage,
     boss,
@@ -74,15 +68,11 @@ export async function startHarness(
     log: quietLog,
     beforeCommit: opts.beforeCommit,
   });
-  await boss.work(
-    MINING_QUEUE,
-    { localConcurrency: opts.concurrency ?? 2, perJobResults: true, pollingIntervalSeconds: 0.5 },
-    mining.handler,
-  );
-  await boss.work(
-    MINING_STOPPED_QUEUE,
-    { includeMetadata: true, pollingIntervalSeconds: 0.5 },
-    (jobs: JobWithMetadata<MiningJobData>[]) => mining.handleStopped(jobs),
+  // Only the mining jobs: the graph jobs they send wait in their queues (their suites run them).
+  await registerJobs(
+    boss,
+    all.filter((r) => r.job.name === mineArticle.name || r.job.name === mineArticleStopped.name),
+    { pollingIntervalSeconds: 0.5, concurrency: { [mineArticle.name]: opts.concurrency ?? 2 } },
   );
   return {
     db: t.db,
@@ -94,8 +84,6 @@ export async function startHarness(
     stop: async () => {
       await boss.stop({ graceful: true, timeout: 20_000 });
       await mining.close();
-      const sender = await senderFor(t.db).catch(() => null);
-      await sender?.stop({ graceful: false, close: false }).catch(() => undefined);
       await t.drop();
     },
   };
@@ -134,7 +122,6 @@ export async function enqueueRaw(
 ): Promise<string> {
   const sha = sha256Hex(data);
   const key = await h.storage.put(sha, data);
-  const boss = await senderFor(h.db);
   return h.db.transaction().execute(async (trx) => {
     await trx
       .insertInto("stored_files")
@@ -146,7 +133,7 @@ export async function enqueueRaw(
       .values({ file_sha256: sha, original_filename: filename, source_kind: kind })
       .returning("id")
       .executeTakeFirstOrThrow();
-    await queueArticle(trx, boss, a.id, "upload");
+    await queueArticle(trx, a.id, "upload");
     return a.id;
   });
 }

@@ -4,7 +4,6 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ingest } from "../../helpers/ingest";
-import { senderFor } from "@/lib/corpus/queue";
 import { queueArticle } from "@/lib/corpus/ingest";
 import { sourcingOf, fingerprints } from "@/lib/corpus/store-mined";
 import { startHarness, waitForArticles, rowCounts, FAST_RETRY, type Harness } from "./harness";
@@ -207,8 +206,7 @@ describe("mining pipeline", () => {
       .where("raw", "like", "Brandtner%")
       .execute();
 
-    const boss = await senderFor(h.db);
-    await h.db.transaction().execute((trx) => queueArticle(trx, boss, articleId, "remine"));
+    await h.db.transaction().execute((trx) => queueArticle(trx, articleId, "remine"));
     await waitForArticles(h.db, [articleId]);
     const after = await h.db
       .selectFrom("statements")

@@ -12,10 +12,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { folderStorage } from "@/lib/storage";
 import { ingest } from "../../helpers/ingest";
-import { senderFor } from "@/lib/corpus/queue";
 import { seedProcedures } from "@/lib/corpus/procedures-store";
 import { TEST_HANG_FILENAME } from "@/lib/mining/isolated";
-import type { RetryPreset } from "@/workers/job-types";
+import type { RetryPreset } from "@/lib/jobs/presets";
 import { rowCounts, waitForArticles } from "./harness";
 import { pdfOf } from "./fixtures";
 import type { DB } from "@/db";
@@ -32,8 +31,6 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   for (const c of children) if (c.exitCode === null && c.signalCode === null) c.kill("SIGKILL");
-  const sender = await senderFor(t.db).catch(() => null);
-  await sender?.stop({ graceful: false, close: false }).catch(() => undefined);
   await t?.drop();
   fs.rmSync(filesDir, { recursive: true, force: true });
 });

@@ -10,7 +10,8 @@ import { sql } from "kysely";
 import { PgBoss } from "pg-boss";
 import { createTestDatabase } from "@/tests/helpers/db";
 import { createDb, type DB } from "@/db";
-import { bossDb, senderFor } from "@/lib/corpus/queue";
+import { bossDb } from "@/lib/jobs/boss-db";
+import { installQueues } from "@/lib/jobs/registry";
 
 let t: Awaited<ReturnType<typeof createTestDatabase>>;
 let one: DB;
@@ -47,10 +48,9 @@ describe("pg-boss's adapter over the Kysely pool", () => {
     await sql`drop schema if exists pgboss cascade`.execute(t.db);
     const worker = new PgBoss({ connectionString: t.url, supervise: false, schedule: false });
     worker.on("error", () => {});
-    const [boss] = await Promise.all([senderFor(one), worker.start()]);
+    await Promise.all([installQueues(one), worker.start()]);
     expect((await sql<{ ok: number }>`select 1 as ok`.execute(one)).rows).toEqual([{ ok: 1 }]);
-    expect(await boss.getQueue("mine-article")).toBeTruthy();
-    await boss.stop({ graceful: false, close: false });
+    expect(await worker.getQueue("mine-article")).toBeTruthy();
     await worker.stop({ graceful: false });
   });
 });

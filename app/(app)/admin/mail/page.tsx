@@ -1,5 +1,6 @@
 import { requirePage } from "@/lib/server/session";
 import { EmptyState } from "@/components/ui/empty-state";
+import { env, mailFakeUrl } from "@/lib/env";
 
 export const metadata = { title: "Captured mail" };
 
@@ -8,13 +9,13 @@ type Mail = { id: string; at: string; to: string[]; subject: string; text: strin
 // Local mode only: the mail fake keeps every message Echoline sends; nothing leaves the machine.
 export default async function MailPage() {
   await requirePage("admin:mail");
-  const base = process.env.MAIL_FAKE_URL ?? `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 2526}`;
+  const base = mailFakeUrl();
   let mails: Mail[] | null = null;
   try {
     // Server-side only: the token never reaches the browser.
     const res = await fetch(`${base}/messages`, {
       cache: "no-store",
-      headers: { "x-mail-fake-token": process.env.MAIL_FAKE_TOKEN ?? "" },
+      headers: { "x-mail-fake-token": env().MAIL_FAKE_TOKEN ?? "" },
     });
     mails = res.ok ? ((await res.json()) as Mail[]) : null;
   } catch {

@@ -21,8 +21,12 @@ export const PATCH = route(
     body: z.object({ workType: z.enum(WORK_TYPES) }),
   },
   async ({ params, body }) => {
-    await setWorkType(getDb(), params.id, body.workType);
-    await rebuildAllSoon(getDb());
+    await getDb()
+      .transaction()
+      .execute(async (trx) => {
+        await setWorkType(trx, params.id, body.workType);
+        await rebuildAllSoon(trx);
+      });
     return { ok: true };
   },
 );

@@ -3,7 +3,7 @@ import { route, readLimited } from "@/lib/server/request";
 import { HttpError, notFound } from "@/lib/server/errors";
 import { getDb } from "@/db";
 import { getStorage } from "@/lib/storage";
-import { senderFor } from "@/lib/corpus/queue";
+import { installQueues } from "@/lib/jobs/registry";
 import { articleStatus, batchExists } from "@/db/queries/articles";
 import { ingestFile, IngestError } from "@/lib/corpus/ingest";
 import { metadataForFile } from "@/lib/corpus/batches";
@@ -42,10 +42,10 @@ export const POST = route(
       throw err;
     }
     const { metadata, matched } = await metadataForFile(db, batchId, query.name);
-    const boss = await senderFor(db);
+    await installQueues(db);
     try {
       const r = await db.transaction().execute((trx) =>
-        ingestFile(trx, boss, getStorage(), {
+        ingestFile(trx, getStorage(), {
           data,
           filename: query.name,
           metadata,

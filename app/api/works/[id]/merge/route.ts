@@ -13,9 +13,12 @@ export const POST = route(
     body: z.object({ intoId: z.uuid({ message: "Choose the work to merge into." }) }),
   },
   async ({ params, body }) => {
-    const db = getDb();
-    await db.transaction().execute((trx) => mergeWorks(trx, params.id, body.intoId));
-    await rebuildAllSoon(db);
+    await getDb()
+      .transaction()
+      .execute(async (trx) => {
+        await mergeWorks(trx, params.id, body.intoId);
+        await rebuildAllSoon(trx);
+      });
     return { ok: true, workId: body.intoId };
   },
 );

@@ -13,9 +13,13 @@ export const POST = route(
     body: z.object({ referenceIds: z.array(z.uuid()).min(1, "Choose at least one reference.").max(1000) }),
   },
   async ({ params, body }) => {
-    const db = getDb();
-    const workId = await db.transaction().execute((trx) => splitWork(trx, params.id, body.referenceIds));
-    await rebuildAllSoon(db);
+    const workId = await getDb()
+      .transaction()
+      .execute(async (trx) => {
+        const workId = await splitWork(trx, params.id, body.referenceIds);
+        await rebuildAllSoon(trx);
+        return workId;
+      });
     return { ok: true, workId };
   },
 );

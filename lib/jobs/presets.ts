@@ -1,10 +1,10 @@
-import type { Job, JobResult } from "pg-boss";
-import { z } from "zod";
-
 /**
- * One background job: its queue name, retry preset and handler. workers/index.ts registers the
- * explicit list in workers/jobs.ts; nothing is wired by glob.
+ * Retry and expiry presets of the job queues. A job's queue is created (and, by worker processes,
+ * kept) with its preset; jobs are sent without options of their own, so they inherit it.
  */
+import { z } from "zod";
+import { env } from "@/lib/env";
+
 export type RetryPreset = {
   retryLimit: number;
   retryDelay: number;
@@ -23,6 +23,10 @@ export const RETRY = {
   mining: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 5 * 60, heartbeatSeconds: 30 },
   graph: { retryLimit: 5, retryDelay: 10, retryBackoff: true, expireInSeconds: 30 * 60 },
   housekeeping: { retryLimit: 1, retryDelay: 60, retryBackoff: false, expireInSeconds: 10 * 60 },
+  // Marking an article failed is one short transaction; a few tries cover a database restart.
+  settle: { retryLimit: 5, retryDelay: 10, retryBackoff: true, expireInSeconds: 60 },
+  // An SMTP server that is down for a while: 8 tries from 30 s doubling cover about two hours.
+  mail: { retryLimit: 8, retryDelay: 30, retryBackoff: true, expireInSeconds: 2 * 60 },
 } satisfies Record<string, RetryPreset>;
 
 const PresetOverride = z
@@ -40,10 +44,9 @@ const PresetOverride = z
 /**
  * The mining preset in force: RETRY.mining, with the fields of ECHOLINE_MINING_RETRY (JSON, e.g.
  * `{"retryLimit":1,"retryDelay":0,"retryBackoff":false}`) laid over it. Tests use it to keep retries
- * fast, including in worker processes they spawn; this is the only place the variable is read.
+ * fast, including in worker processes they spawn.
  */
-export function miningPreset(env: NodeJS.ProcessEnv = process.env): RetryPreset {
-  const raw = env.ECHOLINE_MINING_RETRY;
+export function miningPreset(raw: string | undefined = env().ECHOLINE_MINING_RETRY): RetryPreset {
   if (!raw) return { ...RETRY.mining };
   let json: unknown;
   try {
@@ -62,18 +65,3 @@ export function miningPreset(env: NodeJS.ProcessEnv = process.env): RetryPreset 
   else if (heartbeatSeconds !== undefined) out.heartbeatSeconds = heartbeatSeconds;
   return out;
 }
-
-export type JobDefinition<T extends object = object> = {
-  name: string;
-  preset: RetryPreset;
-  /** How many jobs of this queue one worker process runs at once. */
-  concurrency?: number;
-  /** Cron schedule (pg-boss `schedule`), if the job also runs periodically. */
-  cron?: string;
-  /**
-   * Jobs fetched at once; the worker keeps fetching while batches come back full instead of waiting
-   * out a poll interval per job. Each job of a batch succeeds or fails on its own.
-   */
-  batchSize?: number;
-  handler: (jobs: Job<T>[]) => Promise<JobResult[]>;
-};
