@@ -337,6 +337,9 @@ const THRESHOLD_CUE = new RegExp(
   ].join("|"),
   "i",
 );
+// Words that make a power value a rule rather than a design setting ("a power of .80 is recommended").
+const POWER_RULE =
+  /\b(?:recommend\w*|should|must|minimum|at least|adequate|acceptable|sufficient|conventional\w*|desirable|required|requires?|standard|rule|criterion|threshold|cut[-\s]?off|no less than)\b/i;
 const REPORTED_CUE =
   /\b(?:reported|observed|obtained|achieved|in (?:our|the present|this) (?:data|sample|study)|in the (?:calibration|validation|present) sample|yielded|were between|ranged)\b/i;
 const CONTEXT_CUE = new RegExp(
@@ -519,7 +522,8 @@ function comparatorBefore(gap: string): Comparator | null {
     if (/exceed|above|greater|higher/.test(word)) return ">";
     return "<";
   }
-  if (/(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?)\s*$/.test(g)) return "=";
+  if (/(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?|(?:set|fixed) (?:at|to))\s*$/.test(g))
+    return "=";
   return null;
 }
 
@@ -609,7 +613,10 @@ export function extractStatements(
   const sentenceThreshold =
     (THRESHOLD_CUE.test(s) && ruleCue) || (disputed && (CUT_NOUN_AFTER.test(s) || CUT_NOUN.test(s))) || gradedValues;
   const sentenceReported = REPORTED_CUE.test(s);
-  const contextual = CONTEXT_CUE.test(s) || levelWords.size >= 2;
+  // A graded scale (".60 questionable, .70 acceptable, .80 good") is a general rule: its grades are
+  // not situations, and its "whereas"/"while" joins grades, not contexts (label rules 12 and 14).
+  const graded = levelWords.size >= 2;
+  const contextual = CONTEXT_CUE.test(graded ? s.replace(/\b(?:whereas|while)\b/gi, " ") : s);
   const framing = disputed ? "disputed" : contextual ? "contextual" : "fixed";
   const hasCitation = ctx.hasCitation ?? /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
   const resultSig = isResultSignificance(s);
@@ -642,10 +649,12 @@ export function extractStatements(
   // "NN% power" has the number first.
   for (const m of s.matchAll(/(\d+(?:\.\d+)?)\s*%\s*(?:statistical\s+)?power/gi)) {
     const value = Number(m[1]) / 100;
+    const words = comparatorBefore(s.slice(Math.max(0, m.index! - 40), m.index!));
     cands.push({
       kind: "threshold",
       statistic: "statistical_power",
-      comparator: ">=",
+      // "designed to have 80% power" is a design value (=); "at least 80% power", "80% power is recommended" a rule
+      comparator: words && words !== "=" ? words : POWER_RULE.test(s) || disputed ? ">=" : "=",
       value,
       framing,
       procedure: null,
@@ -677,7 +686,7 @@ export function extractStatements(
     cands.push({
       kind: "threshold",
       statistic: "p_value",
-      comparator: "<",
+      comparator: "=", // a significance level as a setting (label rule 10)
       value: v,
       framing,
       procedure: null,
@@ -918,7 +927,14 @@ export function extractStatements(
       else kind = "reported";
 
       if (kind === "threshold") {
-        if (!comparator || comparator === "=")
+        // A design value stated as a setting ("α = .05", "an alpha level of .01", "a power of .80 was
+        // used to plan") keeps "="; a bare criterion takes the statistic's polarity (label rules 9, 10).
+        const designValue =
+          comparator === "=" &&
+          (key === "p_value" || (key === "statistical_power" && !POWER_RULE.test(s))) &&
+          !disputed;
+        if (designValue) comparator = "=";
+        else if (!comparator || comparator === "=")
           comparator = key === "p_value" ? "<" : HIGHER_IS_WORSE.has(key) ? "<=" : ">=";
         if (key === "p_value" && comparator === "<=" && !/≤|<=|or less|or lower/.test(gap + after.slice(0, 12)))
           comparator = "<";
@@ -962,6 +978,18 @@ export function extractStatements(
         if (comparator === ">") comparator = "<=";
         else if (comparator === "<") comparator = ">=";
       }
+      // a graded scale's lowest band written only as "< x" ("less than 0.5 poor") adds no boundary of its own
+      if (
+        kind === "threshold" &&
+        graded &&
+        key !== "p_value" &&
+        (HIGHER_IS_WORSE.has(key)
+          ? comparator === ">" || comparator === ">="
+          : comparator === "<" || comparator === "<=") &&
+        !/^\s*(?:and|to|[-–])/.test(after) &&
+        !isRangeEnd
+      )
+        continue;
       lastByMention.set(mention, { kind, comparator, end: n.end });
       const dedupeKey = `${kind}:${key}:${comparator}:${value}`;
       if (kind === "threshold" && usedValues.has(dedupeKey)) continue;

@@ -87,8 +87,8 @@ describe("named statistics outside the closed list become 'other' with their lab
 });
 
 describe("significance alpha versus a scale's alpha, and kappa written K", () => {
-  it("an alpha level in a testing context is a significance level", () => {
-    expect(briefs("All tests were two-tailed with an alpha level of .01.")).toEqual(["threshold p_value < 0.01 fixed"]);
+  it("an alpha level in a testing context is a significance level, a design value with = (label rule 10)", () => {
+    expect(briefs("All tests were two-tailed with an alpha level of .01.")).toEqual(["threshold p_value = 0.01 fixed"]);
   });
   it("an alpha level in a reliability context is Cronbach's alpha", () => {
     expect(
@@ -138,10 +138,10 @@ describe("kind: what the number does decides", () => {
   });
   it("a power used to plan is a design cut-off; a percentage of power is a proportion", () => {
     expect(briefs("A power of .80 was used to plan the sample size.")).toEqual([
-      "threshold statistical_power >= 0.8 fixed",
+      "threshold statistical_power = 0.8 fixed",
     ]);
     expect(briefs("The sample size was planned for a power of 80% to detect small effects.")).toEqual([
-      "threshold statistical_power >= 0.8 fixed",
+      "threshold statistical_power = 0.8 fixed",
     ]);
   });
   it("a share of variance explained is a reported R² (27% = .27), but not a factor's share", () => {
