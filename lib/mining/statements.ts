@@ -32,7 +32,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\bfirst[-–\s]stage F(?:[-\s]statistics?|[-\s]values?)?/gi, "first_stage_f"],
   [/\bp[-\s]values?\b/gi, "p_value", { significance: true }],
   [
-    /\bp\b(?=\s+(?:(?:was|is|were|are|values?)\s+)?(?:less than|lower than|smaller than|below|under|at or below|not exceeding|≤|<))/gi,
+    /\bp\b(?=\s+(?:(?:was|is|were|are|values?)\s+)?(?:less than|lower than|smaller than|below|under|at or below|not exceeding|exceed(?:s|ed)?|greater than|above|≤|<))/gi,
     "p_value",
     { significance: true },
   ],
@@ -337,6 +337,28 @@ const THRESHOLD_CUE = new RegExp(
   ].join("|"),
   "i",
 );
+// Removal, exclusion and "problem" rules name the failing side; the statement gives the passing side
+// ("items loading below .40 were deleted" is factor_loading >= .40; label rule 8).
+const FAILING_SIDE =
+  /\b(?:delet\w*|remov\w*|dropped|drop\b|exclu\w*|eliminat\w*|discard\w*|omitted|problem\w*|poor|unacceptabl\w*|inadequate|insufficient|redundan\w*|(?:multi)?collinearity|lack of|misfit|violat\w*)/i;
+const PASSING_SIDE =
+  /\b(?:acceptabl\w*|adequa\w*|unproblematic|retain\w*|kept|keep|good|satisf\w*|sufficient|suffic\w*|supports?|confirm\w*|no (?:\w+ )?(?:problem|concern|issue)\w*|not (?:an? )?(?:\w+ )?(?:problem|concern|issue)\w*|free of)\b/i;
+/** The clause around a number: from the last clause break before it to the next one after it. */
+function clauseAround(s: string, start: number, end: number): string {
+  const brk = /;|,\s*(?:and|but|whereas|while|because|although)\b|\b(?:whereas|while|because|but)\b|\.\s/gi;
+  let from = 0;
+  let to = s.length;
+  for (let m = brk.exec(s); m; m = brk.exec(s)) {
+    if (m.index + m[0].length <= start) from = m.index + m[0].length;
+    else if (m.index >= end) {
+      to = m.index;
+      break;
+    }
+  }
+  return s.slice(from, to);
+}
+const FLIP: Record<string, Comparator> = { ">": "<=", ">=": "<", "<": ">=", "<=": ">" };
+
 // Words that make a power value a rule rather than a design setting ("a power of .80 is recommended").
 const POWER_RULE =
   /\b(?:recommend\w*|should|must|minimum|at least|adequate|acceptable|sufficient|conventional\w*|desirable|required|requires?|standard|rule|criterion|threshold|cut[-\s]?off|no less than)\b/i;
@@ -666,7 +688,9 @@ export function extractStatements(
   const pThresholdSentence =
     /\b(?:consider|regard|deem|treat|accept|defin|interpret|judg|tak)\w*|\bas (?:marginally )?significant\b|\bset (?:at|to)\b|\bused as\b|\badopted\b|\bthresholds?\b|\bcut[-\s]?offs?\b|\bcriteri\w+|\bconvention\w*|\bto (?:show|indicate|denote)\b|\bsignifican\w+ (?:level|threshold)|\blevel of significance|\bsignificance level|\balpha level|\btwo[-\s](?:tailed|sided)\b|\b(?:was|were) (?:used|applied|employed|chosen)\b|\bBonferroni\b|\b(?:corrected|adjusted) (?:alpha|α|significance|p)\b/i.test(
       s,
-    ) || disputed;
+    ) ||
+    disputed ||
+    /\b(?:dropped|removed|deleted|excluded|eliminated|retained|kept)\b/i.test(s);
   for (const m of s.matchAll(pCut)) {
     if (!pThresholdSentence) continue;
     cands.push({
@@ -926,6 +950,7 @@ export function extractStatements(
       else if (sentenceThreshold || (hasCitation && comparator && comparator !== "=")) kind = "threshold";
       else kind = "reported";
 
+      const written = comparator;
       if (kind === "threshold") {
         // A design value stated as a setting ("α = .05", "an alpha level of .01", "a power of .80 was
         // used to plan") keeps "="; a bare criterion takes the statistic's polarity (label rules 9, 10).
@@ -974,9 +999,25 @@ export function extractStatements(
         comparator = "<=";
       }
       // "None of the VIFs exceeded 2.1" (<= 2.1), "No loading was lower than .55" (>= .55)
-      if (/\b(?:no|none of the|not one|not a single|not any)\s*$/i.test(s.slice(0, g.start))) {
+      if (
+        /\b(?:no|none of the|not one|not a single|not any)\s*$/i.test(s.slice(0, g.start)) ||
+        /\b(?:no|none of the|not one|not a single)\s+[\w-]+\s+(?:had|has|have|showed|shows|with)\s+(?:a|an|any)?\s*$/i.test(
+          s.slice(0, g.start),
+        )
+      ) {
         if (comparator === ">") comparator = "<=";
         else if (comparator === "<") comparator = ">=";
+      }
+      if (
+        kind === "threshold" &&
+        written &&
+        written !== "=" &&
+        comparator === written &&
+        !disputed &&
+        !NEGATED.some(([re]) => re.test(gap.toLowerCase()))
+      ) {
+        const clause = clauseAround(s, n.start, n.end);
+        if (FAILING_SIDE.test(clause) && !PASSING_SIDE.test(clause)) comparator = FLIP[comparator];
       }
       // a graded scale's lowest band written only as "< x" ("less than 0.5 poor") adds no boundary of its own
       if (

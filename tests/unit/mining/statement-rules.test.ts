@@ -74,7 +74,7 @@ describe("named statistics outside the closed list become 'other' with their lab
   });
   it("the new keys are their own statistics, not 'other'", () => {
     expect(briefs("A first-stage F above 10 was required.")).toEqual(["threshold first_stage_f > 10 fixed"]);
-    expect(briefs("Tolerance values below 0.10 indicate collinearity.")).toEqual(["threshold tolerance < 0.1 fixed"]);
+    expect(briefs("Tolerance values below 0.10 indicate collinearity.")).toEqual(["threshold tolerance >= 0.1 fixed"]);
     expect(briefs("A Q² above zero indicates predictive relevance.")).toEqual(["threshold q_squared > 0 fixed"]);
     expect(briefs("The difference amounted to d = 0.41.")).toEqual(["reported cohen_d = 0.41 -"]);
     expect(briefs("A minimum sample size of 200 is often recommended for such models.")).toEqual([
