@@ -63,7 +63,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\bskew(?:ness)?(?:\s+values?)?\b/gi, "skewness"],
   [/\bkurtosis(?:\s+values?)?\b/gi, "kurtosis", { needs: /^(?![\s\S]*\bMardia)/ }],
   [
-    /\bminimum sample sizes?\b|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
+    /\bminimum sample sizes?\b|\bminimum sample\b(?=\s+(?:of|was|=))|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
     "minimum_sample_size",
   ],
   [
@@ -72,6 +72,10 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   ],
   [
     /\b(?:Mardia|Durbin[-–]Watson|Bartlett|Box|Levene|Hoelter|Gini|Moran|Harman)['’]?s?\s+(?:normali[sz]ed\s+)?(?:multivariate\s+)?(?:coefficient|statistic|index|critical N|value|test statistic|kurtosis)\b|\bcondition ind(?:ex|ices)\b|\bexpected (?:cell )?(?:counts?|frequenc(?:y|ies))\b|\bmean inter[-–]item correlations?\b|\binter[-–]item correlations?\b|\bcritical ratios?\b|\bDurbin[-–]Watson\b|\bstandardi[sz]ed residuals?\b|\bresidual covariances?\b|\bmodification ind(?:ex|ices)\b|\bMahalanobis distances?\b|\bCook['’]?s distances?\b|\bleverage values?\b|\bz[-\s]scores?\b|\bcommunalit(?:y|ies)\b|\binter[-–]factor correlations?\b/gi,
+    "other",
+  ],
+  [
+    /\bomega[-\s]hierarchical\b|\bω_?h\b|\barea under the (?:ROC\s+)?curve\b|\bAUC\b|\bpartial eta[-\s]squared\b|\bη\s*²\s*p\b|\bη_?p\s*²|\bentropy\b|\b(?:scale[-\s]level\s+|item[-\s]level\s+)?content validity (?:index|ratio)\b|\b[SI]-CVI\b|\bCVI\b|\bCVR\b|\bstandard error of measurement\b|\bsmallest (?:worthwhile|detectable|real) (?:change|difference)\b|\bminimal detectable change\b|\bdesign effects?\b|\bcoefficients? of variation\b|\bresponse rates?\b|\b(?:item )?difficulty ind(?:ex|ices)\b|\bdiscrimination ind(?:ex|ices)\b|ΔAIC\b|∆AIC\b/gi,
     "other",
   ],
   [/\bcorrected item[-–\s]total correlations?|\bitem[-–\s](?:total|rest) correlations?/gi, "item_total_correlation"],
@@ -196,7 +200,7 @@ const DISPUTE_CUE = new RegExp(
 
 // Worked examples, definitions and conditionals that explain what a value means: not statements.
 const ILLUSTRATION =
-  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\branges? (?:from|between) [-−]?1 (?:to|and) \+?1\b/i;
+  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\branges? (?:from|between) [-−]?1 (?:to|and) \+?1\b|^\s*had\b|\bwould have (?:been|had|given|yielded|reached)\b|^\s*if\b[^,;]*\b(?:were|had been)\b/i;
 // Values that are the bounds of a statistic's scale ("kappa equals 1 for perfect agreement").
 const BOUND_MEANING =
   /\b(?:perfect|complete|chance|worse than chance|no (?:agreement|association|relationship|correlation)|random|identical|independent|undefined|by chance)\b/i;
@@ -672,6 +676,24 @@ export function extractStatements(
   for (const m of s.matchAll(/(\d+(?:\.\d+)?)\s*%\s*(?:statistical\s+)?power/gi)) {
     const value = Number(m[1]) / 100;
     const words = comparatorBefore(s.slice(Math.max(0, m.index! - 40), m.index!));
+    // power the design obtained ("the final design had 87% power") is a result (label rule 2)
+    if (
+      /\b(?:had|has|achieved|provided|yielded|gave|obtained|actual|observed|resulting)\s+(?:a\s+|an\s+)?(?:\w+\s+)?$/i.test(
+        s.slice(Math.max(0, m.index! - 30), m.index!),
+      ) &&
+      !/\b(?:would|designed|a priori|plann\w*|required|needed|set|to achieve|to ensure)\b/i.test(s)
+    ) {
+      cands.push({
+        kind: "reported",
+        statistic: "statistical_power",
+        comparator: "=",
+        value,
+        framing: null,
+        procedure: null,
+        at: m.index!,
+      });
+      continue;
+    }
     cands.push({
       kind: "threshold",
       statistic: "statistical_power",
@@ -703,6 +725,36 @@ export function extractStatements(
       at: m.index!,
     });
   }
+  // A required sample size computed in this study ("a power analysis indicated that 146 participants
+  // would be required", "the required sample was 212") is a reported minimum sample size (label rule 2).
+  if (
+    /\b(?:power analys[ie]s|sample size (?:calculation|estimation|determination)|calculat\w*|comput\w*|estimat\w*|indicated|showed|revealed|yielded|suggested|required sample|was required|were required|were needed|was needed)\b/i.test(
+      s,
+    )
+  ) {
+    const computed = [
+      /\b(\d[\d,]*)\s+(?:participants|respondents|subjects|cases|patients|students|people|observations|households|individuals|pharmacies|schools|firms|teachers|nurses|children|adults|employees)\s+(?:per (?:group|arm|condition)\s+|in total\s+)?(?:would be|were|was|are|is|would have been)\s+(?:required|needed|necessary|sufficient)\b/gi,
+      /\b(?:required|necessary|needed|target) (?:total )?sample(?: size)?\s+(?:was|of|=|is|would be)\s+(?:N\s*=\s*)?(?:approximately\s+|about\s+)?(\d[\d,]*)\b/gi,
+      /\b(?:required|need(?:ed)?) (?:a (?:total )?(?:sample(?: size)?|minimum) of\s+)(\d[\d,]*)\b/gi,
+    ];
+    for (const re of computed)
+      for (const m of s.matchAll(re)) {
+        const value = Number(m[1].replace(/,/g, ""));
+        if (!(value >= 2 && value <= 1e6)) continue;
+        if (cands.some((c) => c.statistic === "minimum_sample_size" && c.value === value)) continue;
+        cands.push({
+          kind: "reported",
+          statistic: "minimum_sample_size",
+          comparator: "=",
+          value,
+          framing: null,
+          procedure: null,
+          at: m.index!,
+        });
+        usedValues.set(`reported:minimum_sample_size:=:${value}`, 1);
+      }
+  }
+
   // "at the .05 level", "at the 5% level"
   for (const m of s.matchAll(/\bat the (0?\.\d+|\d+\s*%)\s*(?:significance\s+)?level/gi)) {
     if (resultSig) continue;
@@ -815,7 +867,7 @@ export function extractStatements(
     };
     for (const g of group) {
       let key = g.key;
-      let value = n.percent ? n.value / 100 : n.value;
+      let value = n.percent ? Number((n.value / 100).toFixed(10)) : n.value;
       if (n.count && !COUNT_KEYS.has(key)) continue;
       // A number word is a value only with a comparator or "of" before it ("above zero", "at least ten").
       if (
@@ -847,7 +899,16 @@ export function extractStatements(
         continue;
       // values at the bounds of a statistic's scale, explained: "kappa equals 1 for perfect agreement"
       if ((value === 0 || value === 1 || value === -1) && BOUND_MEANING.test(s) && key !== "q_squared") continue;
-      if (n.percent && key !== "p_value" && key !== "statistical_power") continue;
+      // percentages of proportion statistics are proportions (label rule 16)
+      if (
+        n.percent &&
+        key !== "p_value" &&
+        key !== "statistical_power" &&
+        key !== "r_squared" &&
+        key !== "ave" &&
+        !(key === "other" && /response rate|coefficients? of variation|missing/i.test(s.slice(g.start, g.end)))
+      )
+        continue;
       if (BOUNDED.has(key) && (value < 0 || value > 1)) continue;
       if (key === "minimum_sample_size" ? value < 2 || value > 1e6 : !BOUNDED.has(key) && (value < 0 || value > 1000))
         continue;
