@@ -879,7 +879,15 @@ export function extractStatements(
         continue;
       // an effect size given with its test ("d = 0.21, p = .04") is a result, like the p-value beside it
       // (and the d assumed in a power analysis is neither a rule nor a result)
-      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d|\bpower\b|\bto detect\b/i.test(s)) continue;
+      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d/i.test(s)) continue;
+      // an effect size assumed or expected in planning is a design value ("d = 0.6 expected",
+      // "f² = 0.15 was assumed"; label rule 10): "=", or ">=" for the smallest effect of interest
+      const designEffect =
+        (key === "cohen_d" || key === "f_squared") &&
+        /\b(?:assum\w*|expect\w*|anticipat\w*|hypothesi[sz]ed|to detect|smallest effect|minimum effect|power analys[ie]s|plann\w*)\b/i.test(
+          s,
+        ) &&
+        !/\b(?:obtained|observed|found|yielded|showed)\b/i.test(s);
       // a named statistic of no tracked kind counts only with a rule or a plain "was"/"=" value
       if (g.generic && !sentenceThreshold && !/(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap)) continue;
       // "an alpha level of .70": a significance level is never that large, so it is a scale's alpha
@@ -941,6 +949,15 @@ export function extractStatements(
         !!prevNum &&
         /^\s*(?:and|to|[-–])\s*$/.test(s.slice(prevNum.end, n.start)) &&
         RANGE_OF.test(s.slice(Math.max(0, prevNum.start - 60), prevNum.start));
+      // "Alpha was .86, above the .70 level": an obtained value compared with a criterion
+      const comparedWithCut =
+        cands.some((c) => c.kind === "reported" && c.statistic === key) &&
+        /\b(?:above|below|over|under|exceed\w*|surpass\w*|beyond|meet\w*|clear of|short of|within)\s+the\s+(?:[\w-]+\s+)?$/i.test(
+          gap,
+        ) &&
+        /^\s*(?:level|threshold|cut[-\s]?off|criterion|benchmark|limit|standard|mark|minimum|maximum|rule|guideline|recommendation)\b/i.test(
+          after,
+        );
       let kind: "threshold" | "reported";
       const prevSame = lastByMention.get(mention);
       const listGap = prevSame ? s.slice(prevSame.end, n.start) : "";
@@ -975,7 +992,19 @@ export function extractStatements(
         !/\b(?:achieved|observed|obtained|post[-\s]?hoc|actual|showed|provided|yielded|gave)\b/i.test(s)
       )
         kind = "threshold";
-      else if (cutBefore) kind = "threshold";
+      else if (cutBefore) {
+        kind = "threshold";
+        if (comparedWithCut) comparator = null;
+      } else if (designEffect) {
+        kind = "threshold";
+        comparator = /\b(?:smallest|minimum|minimal) effect\b/i.test(s) ? ">=" : "=";
+      }
+      // "…, above the .70 level", "well clear of the 5 limit": the criterion the obtained value is
+      // compared with; its comparator follows the statistic's polarity (label rule 9)
+      else if (comparedWithCut) {
+        kind = "threshold";
+        comparator = null;
+      }
       // "Two image items with loadings of 0.38 and 0.41 were removed": item-level values, neither a
       // rule nor a result of the scale
       else if (
@@ -1019,7 +1048,7 @@ export function extractStatements(
           comparator === "=" &&
           (key === "p_value" || (key === "statistical_power" && !POWER_RULE.test(s))) &&
           !disputed;
-        if (designValue) comparator = "=";
+        if (designValue || (designEffect && comparator === "=")) comparator = "=";
         else if (!comparator || comparator === "=")
           comparator = key === "p_value" ? "<" : HIGHER_IS_WORSE.has(key) ? "<=" : ">=";
         if (key === "p_value" && comparator === "<=" && !/≤|<=|or less|or lower/.test(gap + after.slice(0, 12)))
@@ -1045,6 +1074,22 @@ export function extractStatements(
       ) {
         // only a range said to be one ("ranged between"): "values between .56 and .74 confirmed" is not
         if (/\b(?:ranged?|ranging)\b/i.test(s.slice(g.end, n.start))) pushRangeEnd(key, value);
+        // "(α = .76–.91)", "(.62–.88)": a range of obtained values reports both ends (label rule 4)
+        else if (
+          isRangeEnd &&
+          /^\s*[-–]\s*$/.test(prevGap) &&
+          cands.some((c) => c.kind === "reported" && c.statistic === key && c.at === prevNum!.start)
+        )
+          cands.push({
+            kind: "reported",
+            statistic: key,
+            comparator: "=",
+            value,
+            framing: null,
+            procedure: null,
+            ...(key === "other" ? { statistic_label: g.label ?? null } : {}),
+            at: n.start,
+          });
         continue;
       }
       if (kind === "threshold" && withinRange) comparator = ">=";
