@@ -582,12 +582,25 @@ export function lastStatistic(sentence: string): StatisticKey | null {
   return findMentions(sentence).at(-1)?.key ?? null;
 }
 
+// Pasted software output, formulas and table rows give no statement (label rule 18): a formula has
+// function calls or operators between symbols; an output line or table row has (almost) no prose words
+// and is laid out in columns, or has no sentence end.
+const FORMULA = /\b(?:sqrt|sum|max|min|log|ln|exp|var)\s*\(|[\w)]\s*[*\/^]\s*\(|\(\s*\w+\s*[-−+]\s*\w+\s*\)\s*[*\/^]/i;
+function pastedOutput(sentence: string): boolean {
+  if (FORMULA.test(sentence) && !/\b(?:was|were|is|are|computed|calculated|defined)\b/i.test(sentence)) return true;
+  const prose = sentence.match(/(?<![\w-])[a-z]{3,}(?![\w-])/g) ?? [];
+  const columns = / {3,}|\t|\|/.test(sentence);
+  const ended = /[.!?]["'”’)]?\s*$/.test(sentence.trim());
+  return prose.length < 2 && (columns || !ended) && /\d/.test(sentence);
+}
+
 export function extractStatements(
   sentence: string,
   matchProcedure: (s: string) => ProcedurePattern | null,
   ctx: SentenceContext = {},
 ): RawStatement[] {
   const out: RawStatement[] = [];
+  if (pastedOutput(sentence)) return out;
   const proc = matchProcedure(sentence);
   if (proc)
     out.push({ kind: "procedure", statistic: null, comparator: null, value: null, framing: null, procedure: proc.key });
@@ -595,6 +608,8 @@ export function extractStatements(
   // Take out confidence intervals and bracketed ranges: their bounds are not values of their own.
   const s = sentence
     .replace(/\(?\s*\b(?:9[059]|99)\s*%\s*(?:CI|confidence interval)\s*[\[(]?[-−.\d\s,–]+[\])]?\s*\)?/gi, " ")
+    // a bracketed interval right after a value: "RMSEA = .052 [.041, .063]"
+    .replace(/(\d)\s*\[\s*[-−]?\d*\.\d+\s*[,;–-]\s*[-−]?\d*\.\d+\s*\]/g, (m, d) => d + " ".repeat(m.length - 1))
     .replace(/\bICC\s*\((\d)(?:,\s*(\d))?\)/g, "ICC")
     .replace(/\b(?:19|20)\d{2}\b/g, (y) => " ".repeat(y.length));
   const mentions = findMentions(s);

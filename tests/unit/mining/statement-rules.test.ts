@@ -178,3 +178,20 @@ describe("kind: what the number does decides", () => {
     expect(briefs("A minimum omega of 0.80 [24–26] was adopted.")).toEqual(["threshold mcdonald_omega >= 0.8 fixed"]);
   });
 });
+
+// The annotation manual's rule 18 (label-rules.md of the held-out set's manual): every line of pasted
+// software output, formula or table row gives nothing, even with a statistic name and a value.
+describe("pasted output, formulas and table rows give no statement", () => {
+  it.each([
+    "CFI = 0.948, TLI = 0.937, RMSEA = 0.058 [0.049, 0.067], SRMR = 0.044",
+    "Comparative Fit Index (CFI)                    0.948",
+    "omega = (sum(lambda))^2 / ((sum(lambda))^2 + sum(theta))",
+    "Cronbach's Alpha    N of Items    .874    12",
+  ])("%s", (line) => expect(briefs(line)).toEqual([]));
+  it("a prose sentence with the same values still reports them, without its interval's bounds", () => {
+    expect(briefs("The comfort model fitted well, with RMSEA = .052 [.041, .063] and CFI = .957.")).toEqual([
+      "reported rmsea = 0.052 -",
+      "reported cfi = 0.957 -",
+    ]);
+  });
+});
