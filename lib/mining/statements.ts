@@ -108,7 +108,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\bKaiser[-–\s]Meyer[-–\s]Olkin|\bKMO\b/gi, "kmo"],
   [/\beigenvalues?\b/gi, "eigenvalue"],
   [/\bintra[-\s]?class correlations?(?: coefficients?)?|\bICCs?(?:\(\d(?:,\s*\d)?\))?/gi, "icc"],
-  [/\b(?:Cohen['’]?s\s+|weighted\s+)?kappas?\b|κ/gi, "cohen_kappa"],
+  [/\b(?:[Cc]ohen['’]?s\s+|[Ww]eighted\s+)?[Kk]appas?\b|\bK[wW]\b|κ/g, "cohen_kappa"],
   [/\bpseudo[-\s]?R²|\bpseudo[-\s]?R2\b|\bR²|\bR2\b|\bR-squared|\bcoefficient of determination/g, "r_squared"],
   [/\b(?:statistical )?power\b|1\s*[-−–]\s*β/gi, "statistical_power"],
   [
@@ -628,6 +628,7 @@ export function extractStatements(
     ctx.previousStatistic &&
     ctx.previousStatistic !== "other" &&
     THRESHOLD_CUE.test(s) &&
+    !/\bsignifican/i.test(s) &&
     !/\b(?:items?|participants|respondents)\b/i.test(s)
   ) {
     // "Values above .90 indicate excellent fit." continues the statistic named just before.
@@ -770,6 +771,45 @@ export function extractStatements(
       }
   }
 
+  // "one time in twenty", "at the five percent level", "values less than 0.05 were considered
+  // statistically significant": a significance level written in words (label rule 16)
+  if (!resultSig && /\bsignifican\w*/i.test(s) && !mentions.some((m) => m.key === "p_value")) {
+    const words =
+      /\b(?:at the|a) (one|five|ten) (?:percent|per cent) (?:significance )?level\b|\bone (?:time |chance )?in (twenty|a hundred|one hundred|ten)\b/i.exec(
+        s,
+      );
+    const plain =
+      /\b(?:values?|results?|differences?|effects?|estimates?)\s+(less than|lower than|smaller than|below|under|≤|<)\s*(0?\.\d+)\s+(?:were|was|are|is)\s+(?:considered|regarded|deemed|taken|treated|interpreted)/i.exec(
+        s,
+      );
+    if (words) {
+      const v = words[1]
+        ? ({ one: 0.01, five: 0.05, ten: 0.1 } as Record<string, number>)[words[1].toLowerCase()]
+        : 1 /
+          ({ twenty: 20, "a hundred": 100, "one hundred": 100, ten: 10 } as Record<string, number>)[
+            words[2].toLowerCase()
+          ];
+      cands.push({
+        kind: "threshold",
+        statistic: "p_value",
+        comparator: words[1] ? "=" : "<",
+        value: v,
+        framing,
+        procedure: null,
+        at: words.index,
+      });
+    } else if (plain && Number(plain[2]) <= 0.1)
+      cands.push({
+        kind: "threshold",
+        statistic: "p_value",
+        comparator: /≤/.test(plain[1]) ? "<=" : "<",
+        value: Number(plain[2]),
+        framing,
+        procedure: null,
+        at: plain.index,
+      });
+  }
+
   // "at the .05 level", "at the 5% level"
   for (const m of s.matchAll(/\bat the (0?\.\d+|\d+\s*%)\s*(?:significance\s+)?level/gi)) {
     if (resultSig) continue;
@@ -877,6 +917,7 @@ export function extractStatements(
           value: v,
           framing: null,
           procedure: null,
+          ...(k === "other" ? { statistic_label: mention.label ?? null } : {}),
           at: n.start,
         });
     };
@@ -965,14 +1006,19 @@ export function extractStatements(
         /^\s*(?:and|to|[-–])\s*$/.test(s.slice(prevNum.end, n.start)) &&
         RANGE_OF.test(s.slice(Math.max(0, prevNum.start - 60), prevNum.start));
       // "Alpha was .86, above the .70 level": an obtained value compared with a criterion
+      const comparing =
+        /\b(above|below|over|under|exceed\w*|surpass\w*|beyond|meet\w*|clear of|short of|within)\s+the\s+((?:[\w-]+\s+){0,4}?)(?:of\s+)?$/i.exec(
+          gap,
+        );
       const comparedWithCut =
         cands.some((c) => c.kind === "reported" && c.statistic === key) &&
-        /\b(?:above|below|over|under|exceed\w*|surpass\w*|beyond|meet\w*|clear of|short of|within)\s+the\s+(?:[\w-]+\s+)?$/i.test(
-          gap,
-        ) &&
-        /^\s*(?:level|threshold|cut[-\s]?off|criterion|benchmark|limit|standard|mark|minimum|maximum|rule|guideline|recommendation)\b/i.test(
-          after,
-        );
+        !!comparing &&
+        (/\b(?:level|threshold|cut[-\s]?off|criterion|benchmark|limit|standard|mark|minimum|maximum|rule|guideline|recommendation|value)\b/i.test(
+          comparing[2],
+        ) ||
+          /^\s*(?:level|threshold|cut[-\s]?off|criterion|benchmark|limit|standard|mark|minimum|maximum|rule|guideline|recommendation)\b/i.test(
+            after,
+          ));
       let kind: "threshold" | "reported";
       const prevSame = lastByMention.get(mention);
       const listGap = prevSame ? s.slice(prevSame.end, n.start) : "";
@@ -1055,6 +1101,13 @@ export function extractStatements(
       else if (sentenceThreshold || (hasCitation && comparator && comparator !== "=")) kind = "threshold";
       else kind = "reported";
 
+      // a statistic of no known polarity passes on the side the obtained value lies
+      if (
+        comparedWithCut &&
+        kind === "threshold" &&
+        (key === "other" || (!BOUNDED.has(key) && !HIGHER_IS_WORSE.has(key) && key !== "first_stage_f"))
+      )
+        comparator = /^(?:below|under|short of|within)/i.test(comparing![1]) ? "<=" : ">=";
       const written = comparator;
       if (kind === "threshold") {
         // A design value stated as a setting ("α = .05", "an alpha level of .01", "a power of .80 was

@@ -123,10 +123,10 @@ describe("kind: what the number does decides", () => {
     ]);
     expect(briefs("The obtained KMO of .92 is excellent.")).toEqual(["reported kmo = 0.92 -"]);
   });
-  it("an obtained value above a required level is a reported value and a cut-off", () => {
+  it("an obtained value above a required level is a reported value and a cut-off, whose comparator the comparing word does not change (label rule 9)", () => {
     expect(briefs("The alpha of the crafting scale was .78, exceeding the required level of .70.")).toEqual([
       "reported cronbach_alpha = 0.78 -",
-      "threshold cronbach_alpha > 0.7 fixed",
+      "threshold cronbach_alpha >= 0.7 fixed",
     ]);
   });
   it("a value within a recommended range is reported, and the range is a cut-off band", () => {
