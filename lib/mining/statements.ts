@@ -974,7 +974,11 @@ export function extractStatements(
       )
         continue;
       if (BOUNDED.has(key) && (value < 0 || value > 1)) continue;
-      if (key === "minimum_sample_size" ? value < 2 || value > 1e6 : !BOUNDED.has(key) && (value < 0 || value > 1000))
+      if (
+        key === "minimum_sample_size"
+          ? value < 2 || value > 1e6
+          : !BOUNDED.has(key) && ((value < 0 && key !== "skewness" && key !== "kurtosis") || value > 1000)
+      )
         continue;
       if (key === "minimum_sample_size" && !sentenceThreshold) continue;
       // a sample's own size is not a statistic; only the minimum asked for counts
@@ -1129,7 +1133,7 @@ export function extractStatements(
       }
       // Ranges: "between X and Y", "X to Y"
       const rangeBefore = /\bbetween\s*$/i.test(gap) || /\bfrom\s*$/i.test(gap);
-      const rangeAfter = /^\s*(?:and|to|[-–])\s*(0?\.\d+|\d+(?:\.\d+)?)/i.exec(after);
+      const rangeAfter = /^\s*(?:and|to|[-–])\s*\+?(0?\.\d+|\d+(?:\.\d+)?)/i.exec(after);
       const prevGap = prevNum ? s.slice(prevNum.end, n.start) : "";
       const isRangeEnd =
         (prevNum &&
@@ -1163,10 +1167,14 @@ export function extractStatements(
       if (kind === "threshold" && withinRange) comparator = ">=";
       else if (kind === "threshold" && rangeEndOfRecommended) comparator = "<=";
       else if (kind === "threshold" && rangeBefore && rangeAfter) {
-        if (HIGHER_IS_WORSE.has(key)) continue; // lower bound of a "lower is better" band says little
+        // an acceptable range gives both ends (label rule 11); the lower end of a "lower is better"
+        // band in a graded scale adds nothing
+        if (HIGHER_IS_WORSE.has(key) && graded) continue;
         comparator = ">=";
       } else if (kind === "threshold" && isRangeEnd) {
-        if (!/\bbetween\s*$/i.test(s.slice(Math.max(0, prevNum!.start - 12), prevNum!.start))) continue; // "X to Y": lower bound only
+        // "X to Y" (not "between"): read as a band's lower end only; the upper end of a graded band adds
+        // no boundary (label rule 12), and held-out figures got worse when every "X to Y" gave both ends
+        if (!/\bbetween\s*$/i.test(s.slice(Math.max(0, prevNum!.start - 12), prevNum!.start))) continue;
         if (/\b(?:lower (?:limit|bound|end)|minimum|floor)\b/i.test(s)) continue; // the band is a minimum
         const repeated = nums.some((x) => x !== n && x !== prevNum && Math.abs(x.value - n.value) < 1e-9);
         if (!HIGHER_IS_WORSE.has(key) && repeated) continue;
