@@ -634,6 +634,19 @@ export function extractStatements(
     // "Values above .90 indicate excellent fit." continues the statistic named just before.
     const m = /\b(?:values?|coefficients?|estimates?)\b(?=[^.;]{0,30}?\d)/i.exec(s);
     if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
+  } else if (
+    !mentions.length &&
+    ctx.previousStatistic &&
+    ctx.previousStatistic !== "other" &&
+    !/\bsignifican/i.test(s)
+  ) {
+    // "The coefficient for the full scale was 0·82" after a sentence on Cronbach's alpha: a noun that
+    // points back names the statistic of the sentence before (label rule 6)
+    const m =
+      /\b(?:the|this|that|its|their|each)\s+(?:\w+\s+)?(?:coefficients?|values?|index|indices|estimates?|statistics?)\b(?=[^.;\d]{0,40}?(?:\bwas|\bwere|=|\bof|\bis|\breached)\s*[-−]?(?:0?[.·]\d|\d))/i.exec(
+        s,
+      );
+    if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
   }
   const nums = findNumbers(s).filter((n) => !mentions.some((m) => n.start >= m.start && n.start < m.end));
   // Worked examples and definitions explain a value; they assert no cut-off and report nothing.
