@@ -232,7 +232,7 @@ const OBTAINED =
 // "a ratio of five to one", "a 5:1 ratio".
 const NUMBER_WORDS = "one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|fifteen|twenty|thirty|forty|fifty";
 const RATIO_FORMS = new RegExp(
-  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses|events)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
+  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses|events)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? (?:was |of )(\d+(?:\.\d+)?\s*(?::|\bto)\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
   "gi",
 );
 function ratioValue(text: string | undefined): number | null {
@@ -285,6 +285,8 @@ const THRESHOLD_CUE = new RegExp(
     "minimum",
     "maximum",
     "retained",
+    "(?:was|were) used (?:to|as)",
+    "to retain",
     "kept",
     "removed",
     "dropped",
@@ -479,7 +481,12 @@ function findMentions(s: string): Mention[] {
   const strong = out.filter((m) => !m.weak);
   if (strong.length) return strong;
   if (out.length) return out;
-  return genericMentions(s).filter((g) => !taken.subarray(g.start, g.end).includes(1));
+  // "a sample-to-item ratio", "cases-to-parameter ratio" are sample_size_ratio, read by RATIO_FORMS
+  return genericMentions(s).filter(
+    (g) =>
+      !taken.subarray(g.start, g.end).includes(1) &&
+      !/\b(?:sample|subjects?|cases?|participants?|respondents?|observations?)[-\s]/i.test(g.label ?? ""),
+  );
 }
 
 type Num = { start: number; end: number; value: number; raw: string; percent: boolean; count: boolean; word: boolean };
