@@ -1063,7 +1063,20 @@ export function extractStatements(
         pushRangeEnd(key, value);
         continue;
       }
-      if (continuesList && prevSame) {
+      // "The composite reliability coefficients (0.81–0.93) exceeded …": a bracketed range of obtained values
+      const bracketRangeStart =
+        /^\s*(?:(?:values?|coefficients?|estimates?|scores?)\s*)?\(\s*$/i.test(gap) &&
+        /^\s*[-–]\s*[-−]?\d*[.·]?\d+\s*\)/.test(after) &&
+        !CUT_NOUN.test(gap);
+      const bracketRangeEnd =
+        !!prevNum &&
+        /^\s*[-–]\s*$/.test(s.slice(prevNum.end, n.start)) &&
+        /^\s*\)/.test(after) &&
+        cands.some((c) => c.kind === "reported" && c.statistic === key && c.at === prevNum.start);
+      if (bracketRangeStart || bracketRangeEnd) {
+        kind = "reported";
+        comparator = "=";
+      } else if (continuesList && prevSame) {
         kind = prevSame.kind;
         if (kind === "reported" || !comparator || comparator === "=") comparator = prevSame.comparator;
       } else if (key === "p_value") {
