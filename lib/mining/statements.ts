@@ -187,7 +187,8 @@ const DISPUTE_CUE = new RegExp(
     "(?:no longer |not |in)defensible",
     "contrary to (?:popular|common|widespread|conventional) (?:belief|wisdom|practice|opinion)",
     "not (?:a |an )?(?:safe|reliable|valid|sufficient|adequate|meaningful|good) (?:\\w+ )?(?:bound|guide|rule|criterion|cut-?off|threshold|limit|indicator|standard|yardstick)",
-    "(?:do|did|does) not (?:follow|adopt|endorse|use|apply) the (?:\\w+ )?(?:common|usual|conventional|traditional|standard|popular)",
+    "(?:do|did|does) not (?:follow|adopt|endorse|use|apply) the (?:\\w+ ){0,2}(?:common|usual|conventional|traditional|standard|popular|cited|recommended|minimum|rule)",
+    "(?:was|were) not (?:followed|adopted|applied|used)",
     "(?:depart|deviate)s? from the (?:\\w+ )?(?:common|usual|conventional|traditional)",
     "too many (?:correct|true|good|valid|acceptable)|too few (?:\\w+ )?(?:incorrect|false|misspecified)",
     "without (?:considering|regard to|any justification|justification|thinking)",
@@ -406,6 +407,9 @@ const CONTEXT_CUE = new RegExp(
     "\\bideally\\b|\\bpreferably\\b",
     "\\bN\\s*[<>≥≤]\\s*\\d",
     "in (?:some|many|most) (?:fields|disciplines|contexts|cases|situations)",
+    "when there (?:are|is|were|was)\\b",
+    "(?:\\w+|\\d+) or (?:more|fewer) (?:experts|raters|judges|panellists|panelists|items|indicators)",
+    "(?:sample|panel) (?:was|is|were|being) (?:small|large|modest)",
   ].join("|"),
   "i",
 );
@@ -683,6 +687,22 @@ export function extractStatements(
   const hasCitation = ctx.hasCitation ?? /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
   const resultSig = isResultSignificance(s);
 
+  // "Rather than the usual VIF cut-off of 10, we used a stricter limit of 3.3": the value set aside is
+  // disputed, the replacement adopted is a fixed threshold (label rule 15)
+  const ratherThan = /\b(?:rather than|instead of|in place of)\b/i.exec(s);
+  const numberFraming = (at: number): RawStatement["framing"] => {
+    if (!ratherThan) return framing;
+    const phraseEnd = s.slice(ratherThan.index).search(/[,;]|\bwe\b/i);
+    const phrase = s.slice(ratherThan.index, phraseEnd < 0 ? s.length : ratherThan.index + phraseEnd);
+    if (!/\d/.test(phrase)) return framing;
+    const inPhrase = at > ratherThan.index && (phraseEnd < 0 || at < ratherThan.index + phraseEnd);
+    if (inPhrase) return "disputed";
+    return disputed
+      ? "fixed"
+      : CONTEXT_CUE.test(s.replace(/\bstricter\b|\bmore liberal\b/gi, " "))
+        ? "contextual"
+        : "fixed";
+  };
   type Cand = RawStatement & { at: number };
   const cands: Cand[] = [];
   const usedValues = new Map<string, number>();
@@ -1255,7 +1275,7 @@ export function extractStatements(
         statistic: key,
         comparator,
         value,
-        framing: kind === "threshold" ? framing : null,
+        framing: kind === "threshold" ? numberFraming(n.start) : null,
         procedure: null,
         ...(key === "other" ? { statistic_label: g.label ?? null } : {}),
         at: n.start,
