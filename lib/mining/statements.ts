@@ -63,7 +63,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\bskew(?:ness)?(?:\s+values?)?\b/gi, "skewness"],
   [/\bkurtosis(?:\s+values?)?\b/gi, "kurtosis", { needs: /^(?![\s\S]*\bMardia)/ }],
   [
-    /\bminimum sample sizes?\b|\bminimum sample\b(?=\s+(?:of|was|=))|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
+    /\bminimum sample sizes?\b|\bminimum sample\b(?=\s+(?:of|was|=))|\b(?:a )?sample (?:size )?of at least(?=\s+\d)|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
     "minimum_sample_size",
   ],
   [
@@ -341,6 +341,7 @@ const THRESHOLD_CUE = new RegExp(
     "assessed (?:using|with|against|by|according)",
     "criteria",
     "indicated by",
+    "points? to",
   ].join("|"),
   "i",
 );
@@ -366,9 +367,13 @@ function clauseAround(s: string, start: number, end: number): string {
 }
 const FLIP: Record<string, Comparator> = { ">": "<=", ">=": "<", "<": ">=", "<=": ">" };
 
+// A sample size calculation: its α, power and effect size are design values.
+const SAMPLE_SIZE_CALC =
+  /\bG\s*\*\s*Power\b|\brequired sample\b|\bsample size (?:was )?(?:calculat|estimat|determin|comput)\w*|\bpower (?:analys[ie]s|calculation)\b|\ba priori\b/i;
+
 // Words that make a power value a rule rather than a design setting ("a power of .80 is recommended").
 const POWER_RULE =
-  /\b(?:recommend\w*|should|must|minimum|at least|adequate|acceptable|sufficient|conventional\w*|desirable|required|requires?|standard|rule|criterion|threshold|cut[-\s]?off|no less than)\b/i;
+  /\b(?:recommend\w*|should|must|minimum|at least|adequate|acceptable|sufficient|conventional\w*|desirable|required(?! sample)|requires?|standard|rule|criterion|threshold|cut[-\s]?off|no less than)\b/i;
 const REPORTED_CUE =
   /\b(?:reported|observed|obtained|achieved|in (?:our|the present|this) (?:data|sample|study)|in the (?:calibration|validation|present) sample|yielded|were between|ranged)\b/i;
 const CONTEXT_CUE = new RegExp(
@@ -559,7 +564,11 @@ function comparatorBefore(gap: string): Comparator | null {
     if (/exceed|above|greater|higher/.test(word)) return ">";
     return "<";
   }
-  if (/(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?|(?:set|fixed) (?:at|to))\s*$/.test(g))
+  if (
+    /(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?|(?:set|fixed|adjusted|corrected|reduced|lowered) (?:at|to))\s*$/.test(
+      g,
+    )
+  )
     return "=";
   return null;
 }
@@ -668,7 +677,10 @@ export function extractStatements(
   // "f² values of 0.02, 0.15 and 0.35 represent small, medium and large effects": a graded scale
   const gradedValues =
     levelWords.size >= 2 &&
-    /(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) &&
+    (/(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) ||
+      (s.match(
+        /\d\s*(?:is|are|as|=|:)?\s*(?:small|medium|large|weak|moderate|strong|poor|fair|good|excellent|acceptable|substantial)\b/gi,
+      )?.length ?? 0) >= 3) &&
     !/\b(?:was|were|obtained|observed|yielded)\b/i.test(s);
   // Evaluative words alone ("was satisfactory, with alphas between .74 and .88") describe a result
   // when the sentence speaks in the past of its own data; a rule needs more than praise.
@@ -729,8 +741,10 @@ export function extractStatements(
 
   // "80% power", "a power of .80": power written before its number is handled by the general rule;
   // "NN% power" has the number first.
-  for (const m of s.matchAll(/(\d+(?:\.\d+)?)\s*%\s*(?:statistical\s+)?power/gi)) {
-    const value = Number(m[1]) / 100;
+  for (const m of s.matchAll(
+    /(\d+(?:\.\d+)?)\s*%\s*(?:statistical\s+)?power|(?<=\bpowered (?:at|to|for) )(\d+(?:\.\d+)?)\s*%/gi,
+  )) {
+    const value = Number(m[1] ?? m[2]) / 100;
     const words = comparatorBefore(s.slice(Math.max(0, m.index! - 40), m.index!));
     // power the design obtained ("the final design had 87% power") is a result (label rule 2)
     if (
@@ -781,6 +795,7 @@ export function extractStatements(
       at: m.index!,
     });
   }
+  const consumed = new Set<number>();
   // A required sample size computed in this study ("a power analysis indicated that 146 participants
   // would be required", "the required sample was 212") is a reported minimum sample size (label rule 2).
   if (
@@ -808,6 +823,7 @@ export function extractStatements(
           at: m.index!,
         });
         usedValues.set(`reported:minimum_sample_size:=:${value}`, 1);
+        consumed.add(m.index! + m[0].lastIndexOf(m[1]));
       }
   }
 
@@ -894,6 +910,7 @@ export function extractStatements(
   >();
   for (let ni = 0; ni < nums.length; ni++) {
     const n = nums[ni];
+    if (consumed.has(n.start)) continue;
     if (
       /^\s*(?:%\s*)?(?:power\b|(?:cases|respondents|participants|observations|subjects|people|events)\s+(?:per|for each|for every)\b)/i.test(
         s.slice(n.end, n.end + 30),
@@ -905,7 +922,11 @@ export function extractStatements(
     if (n.raw === "0" && /^\.\s*$/.test(s.slice(n.end))) continue;
     const blocked = BLOCKER.test(before.slice(-24)) && !/1\s*[-−–]\s*β\s*=\s*$/.test(before);
     if (/\bp\s*[<=>≤≥]\s*$/i.test(before) || /\bat the\s*$/i.test(before)) continue;
-    if (/^\s*[-–]?(?:point|item|year|day|week|month|hour|minute|factor|wave)s?\b/i.test(s.slice(n.end, n.end + 12)))
+    if (
+      /^\s*[-–]?(?:point|item|year|day|week|month|hour|minute|factor|wave)s?\b(?!\s+(?:to|towards)\b)/i.test(
+        s.slice(n.end, n.end + 16),
+      )
+    )
       continue;
     // the statistic this number belongs to: the nearest mention before it, within the sentence part
     // that has no other number-bearing mention in between.
@@ -980,9 +1001,10 @@ export function extractStatements(
       // "f² = 0.15 was assumed"; label rule 10): "=", or ">=" for the smallest effect of interest
       const designEffect =
         (key === "cohen_d" || key === "f_squared") &&
-        /\b(?:assum\w*|expect\w*|anticipat\w*|hypothesi[sz]ed|to detect|smallest effect|minimum effect|power analys[ie]s|plann\w*)\b/i.test(
+        (/\b(?:assum\w*|expect\w*|anticipat\w*|hypothesi[sz]ed|to detect|smallest effect|minimum effect|power analys[ie]s|plann\w*)\b/i.test(
           s,
-        ) &&
+        ) ||
+          SAMPLE_SIZE_CALC.test(s)) &&
         !/\b(?:obtained|observed|found|yielded|showed)\b/i.test(s);
       // a named statistic of no tracked kind counts only with a rule or a plain "was"/"=" value
       if (g.generic && !sentenceThreshold && !/(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap)) continue;
@@ -1106,7 +1128,7 @@ export function extractStatements(
       else if (
         key === "statistical_power" &&
         PLANNING.test(s) &&
-        !/(?:=|\bwas|\bwere)\s*$/i.test(gap) &&
+        (!/(?:=|\bwas|\bwere)\s*$/i.test(gap) || SAMPLE_SIZE_CALC.test(s)) &&
         !/\b(?:achieved|observed|obtained|post[-\s]?hoc|actual|showed|provided|yielded|gave)\b/i.test(s)
       )
         kind = "threshold";
