@@ -46,10 +46,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
     "cohen_kappa",
     { needs: AGREEMENT },
   ],
-  [
-    /\bCohen['’]?s\s+d\b|\b(?:standardi[sz]ed mean difference|effect size d)\b|\bd(?=\s*[=≥≤]\s*[-−]?\d*\.?\d)/g,
-    "cohen_d",
-  ],
+  [/\bCohen['’]?s\s+d\b|\b(?:effect size d)\b|\bd(?=\s*[=≥≤]\s*[-−]?\d*\.?\d)/g, "cohen_d"],
   [/\b(?:Cohen['’]?s\s+)?f\s*²|\bf\^2|\bf-squared|\bf2\b(?!\s*=)/g, "f_squared"],
   [/\b(?:Stone[-–]Geisser(?:['’]s)?\s+)?Q\s*²|\bQ2\b|\bQ-squared|\bStone[-–]Geisser\b/g, "q_squared"],
   [
@@ -75,7 +72,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
     "other",
   ],
   [
-    /\bomega[-\s]hierarchical\b|\bω_?h\b|\barea under the (?:ROC\s+)?curve\b|\bAUC\b|\bpartial eta[-\s]squared\b|\bη\s*²\s*p\b|\bη_?p\s*²|\bentropy\b|\b(?:scale[-\s]level\s+|item[-\s]level\s+)?content validity (?:index|ratio)\b|\b[SI]-CVI\b|\bCVI\b|\bCVR\b|\bstandard error of measurement\b|\bsmallest (?:worthwhile|detectable|real) (?:change|difference)\b|\bminimal detectable change\b|\bdesign effects?\b|\bcoefficients? of variation\b|\bresponse rates?\b|\b(?:item )?difficulty ind(?:ex|ices)\b|\bdiscrimination ind(?:ex|ices)\b|ΔAIC\b|∆AIC\b/gi,
+    /\bomega[-\s]hierarchical\b|\bω_?h\b|\barea under the (?:ROC\s+)?curve\b|\bAUC\b|\bpartial eta[-\s]squared\b|\bη\s*²\s*p\b|\bη_?p\s*²|\bentropy\b|\b(?:scale[-\s]level\s+|item[-\s]level\s+)?content validity (?:index|ratio)\b|\b[SI]-CVI\b|\bCVI\b|\bCVR\b|\bstandard error of measurement\b|\bsmallest (?:worthwhile|detectable|real) (?:change|difference)\b|\bminimal detectable change\b|\bdesign effects?\b|\bcoefficients? of variation\b|\bresponse rates?\b|\b(?:item )?difficulty ind(?:ex|ices)\b|\bdiscrimination ind(?:ex|ices)\b|ΔAIC\b|∆AIC\b|\bstandardi[sz]ed mean differences?\b|\bcross[-–]loadings?\b|\b(?:inter-?expert|expert|panel) agreement\b|\bagreement (?:among|between) (?:the )?(?:experts|panel(?:lists)?)\b|\bmissing (?:responses|items|data|values|answers)\b/gi,
     "other",
   ],
   [/\bcorrected item[-–\s]total correlations?|\bitem[-–\s](?:total|rest) correlations?/gi, "item_total_correlation"],
@@ -416,7 +413,7 @@ const CONTEXT_CUE = new RegExp(
     "because of (?:the |our |its )?(?:large|small|big|modest|limited)",
     "for (?:a |the )?panels? of",
     "(?:for|with|in) (?:reflective|formative) (?:constructs?|measures?|indicators?|models?)",
-    "with (?:more|fewer|less) than \\d",
+    "with (?:more|fewer|less) than \\d+ (?:respondents|participants|cases|observations|subjects|experts|raters|items|indicators)",
     "(?:for|with) (?:\\w+ )?(?:panel|sample) sizes?",
     "(?:\\w+|\\d+) or (?:more|fewer) (?:experts|raters|judges|panellists|panelists|items|indicators)",
     "(?:sample|panel) (?:was|is|were|being) (?:small|large|modest)",
@@ -892,6 +889,20 @@ export function extractStatements(
     /\b(?:explain\w*|accounted for|accounts for|account for)\s+(?:only\s+|about\s+|approximately\s+|around\s+|nearly\s+|almost\s+|roughly\s+|some\s+)?(\d+(?:\.\d+)?)\s*(?:%|percent\b|per cent\b)\s+of\s+(?:the\s+)?(?:total\s+|overall\s+)?variance/gi,
   )) {
     const subject = s.slice(0, m.index);
+    if (/\b(?:factors?|components?|dimensions?)\b/i.test(subject) && !/\b(?:ICC|intraclass|method)\b/i.test(subject)) {
+      // variance explained by factors or components is an 'other' statistic (label rule 17)
+      cands.push({
+        kind: "reported",
+        statistic: "other",
+        statistic_label: "variance explained",
+        comparator: "=",
+        value: Number(m[1]) / 100,
+        framing: null,
+        procedure: null,
+        at: m.index!,
+      });
+      continue;
+    }
     if (/\b(?:factors?|components?|dimensions?|eigen\w*|ICC|intraclass|method)\b/i.test(subject)) continue;
     const value = Number(m[1]) / 100;
     const already =
@@ -1037,7 +1048,9 @@ export function extractStatements(
         key !== "statistical_power" &&
         key !== "r_squared" &&
         key !== "ave" &&
-        !(key === "other" && /response rate|coefficients? of variation|missing/i.test(s.slice(g.start, g.end)))
+        !(
+          key === "other" && /response rate|coefficients? of variation|missing|agreement/i.test(s.slice(g.start, g.end))
+        )
       )
         continue;
       if (BOUNDED.has(key) && (value < 0 || value > 1)) continue;

@@ -144,11 +144,13 @@ describe("kind: what the number does decides", () => {
       "threshold statistical_power = 0.8 fixed",
     ]);
   });
-  it("a share of variance explained is a reported R² (27% = .27), but not a factor's share", () => {
+  it("a share of variance explained is a reported R² (27% = .27), and a factor's share is an 'other' statistic (label rule 17)", () => {
     expect(briefs("The twelve predictors accounted for 27% of the variance in strain.")).toEqual([
       "reported r_squared = 0.27 -",
     ]);
-    expect(briefs("The first factor accounted for 27% of the variance.")).toEqual([]);
+    expect(briefs("The first factor accounted for 27% of the variance.")).toEqual([
+      "reported other = 0.27 - [variance explained]",
+    ]);
   });
   it("number words and ratio forms are values", () => {
     expect(briefs("At least ten cases per indicator were required for the factor analysis.")).toEqual([
