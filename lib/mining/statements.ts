@@ -1273,6 +1273,8 @@ export function extractStatements(
         if (!HIGHER_IS_WORSE.has(key) && repeated) continue;
         comparator = "<=";
       }
+      // "McDonald's omega reached .89": an obtained value, not a bound
+      if (kind === "reported" && comparator === ">=" && /\breach(?:ed|es)?\s*$/i.test(gap)) comparator = "=";
       // "None of the VIFs exceeded 2.1" (<= 2.1), "No loading was lower than .55" (>= .55)
       if (
         /\b(?:no|none of the|not one|not a single|not any)\s*$/i.test(s.slice(0, g.start)) ||
