@@ -198,7 +198,7 @@ const DISPUTE_CUE = new RegExp(
 
 // Worked examples, definitions and conditionals that explain what a value means: not statements.
 const ILLUSTRATION =
-  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\branges? (?:from|between) [-−]?1 (?:to|and) \+?1\b|^\s*had\b|\bwould have (?:been|had|given|yielded|reached)\b|^\s*if\b[^,;]*\b(?:were|had been)\b/i;
+  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\b(?:ranges?|varies|can vary|lies?) (?:from|between) (?:[-−]?1|0|zero|minus one) (?:to|and) (?:\+?1|one)\b|^\s*had\b|\bwould have (?:been|had|given|yielded|reached)\b|^\s*if\b[^,;]*\b(?:were|had been)\b/i;
 // Values that are the bounds of a statistic's scale ("kappa equals 1 for perfect agreement").
 const BOUND_MEANING =
   /\b(?:perfect|complete|chance|worse than chance|no (?:agreement|association|relationship|correlation)|random|identical|independent|undefined|by chance)\b/i;
