@@ -99,7 +99,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\broot mean square error of approximation|\bRMSEA\b/gi, "rmsea"],
   [/\bstandardi[sz]ed root mean (?:square )?residual|\bSRMR\b/gi, "srmr"],
   [
-    /χ²\s*\/\s*df|χ2\s*\/\s*df|chi[-\s]square\s*\/\s*df|\bnormed chi[-\s]square|\bchi[-\s]square to degrees of freedom(?: ratio)?|\bCMIN\s*\/\s*df/gi,
+    /χ²\s*\/\s*df|χ2\s*\/\s*df|chi[-\s]square\s*\/\s*df|\bnormed chi[-\s]square|\bchi[-\s]square to degrees of freedom(?: ratio)?|\bratio of (?:the )?(?:χ²|χ2|chi[-\s]square) to (?:the )?degrees of freedom|\bCMIN\s*\/\s*df/gi,
     "chi_square_df",
   ],
   [/\bKaiser[-–\s]Meyer[-–\s]Olkin|\bKMO\b/gi, "kmo"],
@@ -339,6 +339,8 @@ const THRESHOLD_CUE = new RegExp(
     "criteria",
     "indicated by",
     "points? to",
+    "(?:is|are|becomes?|be) (?:a |an )?(?:\\w+ )?(?:concern|problem|issue)",
+    "puts? the bar",
   ].join("|"),
   "i",
 );
