@@ -32,7 +32,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\bfirst[-–\s]stage F(?:[-\s]statistics?|[-\s]values?)?/gi, "first_stage_f"],
   [/\bp[-\s]values?\b/gi, "p_value", { significance: true }],
   [
-    /\bp\b(?=\s+(?:(?:was|is|were|are|values?)\s+)?(?:less than|lower than|smaller than|below|under|at or below|not exceeding|≤|<))/gi,
+    /\bp\b(?=\s+(?:(?:was|is|were|are|values?)\s+)?(?:less than|lower than|smaller than|below|under|at or below|not exceeding|exceed(?:s|ed)?|greater than|above|≤|<))/gi,
     "p_value",
     { significance: true },
   ],
@@ -46,10 +46,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
     "cohen_kappa",
     { needs: AGREEMENT },
   ],
-  [
-    /\bCohen['’]?s\s+d\b|\b(?:standardi[sz]ed mean difference|effect size d)\b|\bd(?=\s*[=≥≤]\s*[-−]?\d*\.?\d)/g,
-    "cohen_d",
-  ],
+  [/\bCohen['’]?s\s+d\b|\b(?:effect size d)\b|\bd(?=\s*[=≥≤]\s*[-−]?\d*\.?\d)/g, "cohen_d"],
   [/\b(?:Cohen['’]?s\s+)?f\s*²|\bf\^2|\bf-squared|\bf2\b(?!\s*=)/g, "f_squared"],
   [/\b(?:Stone[-–]Geisser(?:['’]s)?\s+)?Q\s*²|\bQ2\b|\bQ-squared|\bStone[-–]Geisser\b/g, "q_squared"],
   [
@@ -63,7 +60,7 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\bskew(?:ness)?(?:\s+values?)?\b/gi, "skewness"],
   [/\bkurtosis(?:\s+values?)?\b/gi, "kurtosis", { needs: /^(?![\s\S]*\bMardia)/ }],
   [
-    /\bminimum sample sizes?\b|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
+    /\bminimum sample sizes?\b|\bminimum sample\b(?=\s+(?:of|was|=))|\b(?:a )?sample (?:size )?of at least(?=\s+\d)|\bminimum (?:number of (?:participants|respondents|cases|observations|subjects))\b|\bsample sizes?\b(?=[^.;]{0,40}\b(?:at least|no (?:fewer|less) than|not (?:fewer|less) than|minimum|a minimum)\b)/gi,
     "minimum_sample_size",
   ],
   [
@@ -72,6 +69,10 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   ],
   [
     /\b(?:Mardia|Durbin[-–]Watson|Bartlett|Box|Levene|Hoelter|Gini|Moran|Harman)['’]?s?\s+(?:normali[sz]ed\s+)?(?:multivariate\s+)?(?:coefficient|statistic|index|critical N|value|test statistic|kurtosis)\b|\bcondition ind(?:ex|ices)\b|\bexpected (?:cell )?(?:counts?|frequenc(?:y|ies))\b|\bmean inter[-–]item correlations?\b|\binter[-–]item correlations?\b|\bcritical ratios?\b|\bDurbin[-–]Watson\b|\bstandardi[sz]ed residuals?\b|\bresidual covariances?\b|\bmodification ind(?:ex|ices)\b|\bMahalanobis distances?\b|\bCook['’]?s distances?\b|\bleverage values?\b|\bz[-\s]scores?\b|\bcommunalit(?:y|ies)\b|\binter[-–]factor correlations?\b/gi,
+    "other",
+  ],
+  [
+    /\bomega[-\s]hierarchical\b|\bω_?h\b|\barea under the (?:ROC\s+)?curve\b|\bAUC\b|\bpartial eta[-\s]squared\b|\bη\s*²\s*p\b|\bη_?p\s*²|\bentropy\b|\b(?:scale[-\s]level\s+|item[-\s]level\s+)?content validity (?:index|ratio)\b|\b[SI]-CVI\b|\bCVI\b|\bCVR\b|\bstandard error of measurement\b|\bsmallest (?:worthwhile|detectable|real) (?:change|difference)\b|\bminimal detectable change\b|\bdesign effects?\b|\bcoefficients? of variation\b|\bresponse rates?\b|\b(?:item )?difficulty ind(?:ex|ices)\b|\bdiscrimination ind(?:ex|ices)\b|ΔAIC\b|∆AIC\b|\bstandardi[sz]ed mean differences?\b|\bcross[-–]loadings?\b|\b(?:inter-?expert|expert|panel) agreement\b|\bagreement (?:among|between) (?:the )?(?:experts|panel(?:lists)?)\b|\bmissing (?:responses|items|data|values|answers)\b/gi,
     "other",
   ],
   [/\bcorrected item[-–\s]total correlations?|\bitem[-–\s](?:total|rest) correlations?/gi, "item_total_correlation"],
@@ -98,13 +99,13 @@ const LEXICON: [RegExp, StatisticKey, MentionFlags?][] = [
   [/\broot mean square error of approximation|\bRMSEA\b/gi, "rmsea"],
   [/\bstandardi[sz]ed root mean (?:square )?residual|\bSRMR\b/gi, "srmr"],
   [
-    /χ²\s*\/\s*df|χ2\s*\/\s*df|chi[-\s]square\s*\/\s*df|\bnormed chi[-\s]square|\bchi[-\s]square to degrees of freedom(?: ratio)?|\bCMIN\s*\/\s*df/gi,
+    /χ²\s*\/\s*df|χ2\s*\/\s*df|chi[-\s]square\s*\/\s*df|\bnormed chi[-\s]square|\bchi[-\s]square to degrees of freedom(?: ratio)?|\bratio of (?:the )?(?:χ²|χ2|chi[-\s]square) to (?:the )?degrees of freedom|\bCMIN\s*\/\s*df/gi,
     "chi_square_df",
   ],
   [/\bKaiser[-–\s]Meyer[-–\s]Olkin|\bKMO\b/gi, "kmo"],
   [/\beigenvalues?\b/gi, "eigenvalue"],
   [/\bintra[-\s]?class correlations?(?: coefficients?)?|\bICCs?(?:\(\d(?:,\s*\d)?\))?/gi, "icc"],
-  [/\b(?:Cohen['’]?s\s+|weighted\s+)?kappas?\b|κ/gi, "cohen_kappa"],
+  [/\b(?:[Cc]ohen['’]?s\s+|[Ww]eighted\s+)?[Kk]appas?\b|\bK[wW]\b|κ/g, "cohen_kappa"],
   [/\bpseudo[-\s]?R²|\bpseudo[-\s]?R2\b|\bR²|\bR2\b|\bR-squared|\bcoefficient of determination/g, "r_squared"],
   [/\b(?:statistical )?power\b|1\s*[-−–]\s*β/gi, "statistical_power"],
   [
@@ -183,7 +184,8 @@ const DISPUTE_CUE = new RegExp(
     "(?:no longer |not |in)defensible",
     "contrary to (?:popular|common|widespread|conventional) (?:belief|wisdom|practice|opinion)",
     "not (?:a |an )?(?:safe|reliable|valid|sufficient|adequate|meaningful|good) (?:\\w+ )?(?:bound|guide|rule|criterion|cut-?off|threshold|limit|indicator|standard|yardstick)",
-    "(?:do|did|does) not (?:follow|adopt|endorse|use|apply) the (?:\\w+ )?(?:common|usual|conventional|traditional|standard|popular)",
+    "(?:do|did|does) not (?:follow|adopt|endorse|use|apply) the (?:\\w+ ){0,2}(?:common|usual|conventional|traditional|standard|popular|cited|recommended|minimum|rule)",
+    "(?:was|were) not (?:followed|adopted|applied|used)",
     "(?:depart|deviate)s? from the (?:\\w+ )?(?:common|usual|conventional|traditional)",
     "too many (?:correct|true|good|valid|acceptable)|too few (?:\\w+ )?(?:incorrect|false|misspecified)",
     "without (?:considering|regard to|any justification|justification|thinking)",
@@ -196,7 +198,7 @@ const DISPUTE_CUE = new RegExp(
 
 // Worked examples, definitions and conditionals that explain what a value means: not statements.
 const ILLUSTRATION =
-  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\branges? (?:from|between) [-−]?1 (?:to|and) \+?1\b/i;
+  /^\s*(?:for (?:example|instance)|to illustrate|as an (?:example|illustration)|consider (?:a|an) |suppose|imagine)\b|\bwould (?:mean|imply|indicate|suggest)\b|\b(?:implies|means) that\b|\bby definition\b|\bcan (?:range|vary|take (?:any )?values?)\b|\b(?:ranges?|varies|can vary|lies?) (?:from|between) (?:[-−]?1|0|zero|minus one) (?:to|and) (?:\+?1|one)\b|^\s*had\b|\bwould have (?:been|had|given|yielded|reached)\b|^\s*if\b[^,;]*\b(?:were|had been)\b/i;
 // Values that are the bounds of a statistic's scale ("kappa equals 1 for perfect agreement").
 const BOUND_MEANING =
   /\b(?:perfect|complete|chance|worse than chance|no (?:agreement|association|relationship|correlation)|random|identical|independent|undefined|by chance)\b/i;
@@ -228,7 +230,7 @@ const OBTAINED =
 // "a ratio of five to one", "a 5:1 ratio".
 const NUMBER_WORDS = "one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|fifteen|twenty|thirty|forty|fifty";
 const RATIO_FORMS = new RegExp(
-  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses|events)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? of (\d+(?:\.\d+)?\s*:\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
+  String.raw`\b(\d+(?:\.\d+)?|${NUMBER_WORDS})\s+(?:cases|respondents|participants|observations|subjects|people|responses|events)\s+(?:per|for each|for every)\s+(?:estimated\s+|free\s+)?(?:items?|indicators?|variables?|parameters?|predictors?|observed variables?)|\bratios? (?:was |of )(\d+(?:\.\d+)?\s*(?::|\bto)\s*1|(?:${NUMBER_WORDS})[-\s]to[-\s]one)\b|\b(\d+\s*:\s*1)\s+ratio|(?<=\b(?:cases|sample size|participants|respondents|observations|subjects)\b[^.;]{0,120}?)\b(\d+(?:\.\d+)?\s*:\s*1)\b`,
   "gi",
 );
 function ratioValue(text: string | undefined): number | null {
@@ -281,6 +283,8 @@ const THRESHOLD_CUE = new RegExp(
     "minimum",
     "maximum",
     "retained",
+    "(?:was|were) used (?:to|as)",
+    "to retain",
     "kept",
     "removed",
     "dropped",
@@ -334,9 +338,41 @@ const THRESHOLD_CUE = new RegExp(
     "assessed (?:using|with|against|by|according)",
     "criteria",
     "indicated by",
+    "points? to",
+    "(?:is|are|becomes?|be) (?:a |an )?(?:\\w+ )?(?:concern|problem|issue)",
+    "puts? the bar",
   ].join("|"),
   "i",
 );
+// Removal, exclusion and "problem" rules name the failing side; the statement gives the passing side
+// ("items loading below .40 were deleted" is factor_loading >= .40; label rule 8).
+const FAILING_SIDE =
+  /\b(?:delet\w*|remov\w*|dropped|drop\b|exclu\w*|eliminat\w*|discard\w*|omitted|problem\w*|poor|unacceptabl\w*|inadequate|insufficient|redundan\w*|(?:multi)?collinearity|lack of|misfit|violat\w*)/i;
+const PASSING_SIDE =
+  /\b(?:acceptabl\w*|adequa\w*|unproblematic|retain\w*|kept|keep|good|satisf\w*|sufficient|suffic\w*|supports?|confirm\w*|no (?:\w+ )?(?:problem|concern|issue)\w*|not (?:an? )?(?:\w+ )?(?:problem|concern|issue)\w*|free of)\b/i;
+/** The clause around a number: from the last clause break before it to the next one after it. */
+function clauseAround(s: string, start: number, end: number): string {
+  const brk = /;|,\s*(?:and|but|whereas|while|because|although)\b|\b(?:whereas|while|because|but)\b|\.\s/gi;
+  let from = 0;
+  let to = s.length;
+  for (let m = brk.exec(s); m; m = brk.exec(s)) {
+    if (m.index + m[0].length <= start) from = m.index + m[0].length;
+    else if (m.index >= end) {
+      to = m.index;
+      break;
+    }
+  }
+  return s.slice(from, to);
+}
+const FLIP: Record<string, Comparator> = { ">": "<=", ">=": "<", "<": ">=", "<=": ">" };
+
+// A sample size calculation: its α, power and effect size are design values.
+const SAMPLE_SIZE_CALC =
+  /\bG\s*\*\s*Power\b|\brequired sample\b|\bsample size (?:was )?(?:calculat|estimat|determin|comput)\w*|\bpower (?:analys[ie]s|calculation)\b|\ba priori\b/i;
+
+// Words that make a power value a rule rather than a design setting ("a power of .80 is recommended").
+const POWER_RULE =
+  /\b(?:recommend\w*|should|must|minimum|at least|adequate|acceptable|sufficient|conventional\w*|desirable|required(?! sample)|requires?|standard|rule|criterion|threshold|cut[-\s]?off|no less than)\b/i;
 const REPORTED_CUE =
   /\b(?:reported|observed|obtained|achieved|in (?:our|the present|this) (?:data|sample|study)|in the (?:calibration|validation|present) sample|yielded|were between|ranged)\b/i;
 const CONTEXT_CUE = new RegExp(
@@ -375,6 +411,14 @@ const CONTEXT_CUE = new RegExp(
     "\\bideally\\b|\\bpreferably\\b",
     "\\bN\\s*[<>≥≤]\\s*\\d",
     "in (?:some|many|most) (?:fields|disciplines|contexts|cases|situations)",
+    "when there (?:are|is|were|was)\\b",
+    "because of (?:the |our |its )?(?:large|small|big|modest|limited)",
+    "for (?:a |the )?panels? of",
+    "(?:for|with|in) (?:reflective|formative) (?:constructs?|measures?|indicators?|models?)",
+    "with (?:more|fewer|less) than \\d+ (?:respondents|participants|cases|observations|subjects|experts|raters|items|indicators)",
+    "(?:for|with) (?:\\w+ )?(?:panel|sample) sizes?",
+    "(?:\\w+|\\d+) or (?:more|fewer) (?:experts|raters|judges|panellists|panelists|items|indicators)",
+    "(?:sample|panel) (?:was|is|were|being) (?:small|large|modest)",
   ].join("|"),
   "i",
 );
@@ -450,7 +494,12 @@ function findMentions(s: string): Mention[] {
   const strong = out.filter((m) => !m.weak);
   if (strong.length) return strong;
   if (out.length) return out;
-  return genericMentions(s).filter((g) => !taken.subarray(g.start, g.end).includes(1));
+  // "a sample-to-item ratio", "cases-to-parameter ratio" are sample_size_ratio, read by RATIO_FORMS
+  return genericMentions(s).filter(
+    (g) =>
+      !taken.subarray(g.start, g.end).includes(1) &&
+      !/\b(?:sample|subjects?|cases?|participants?|respondents?|observations?)[-\s]/i.test(g.label ?? ""),
+  );
 }
 
 type Num = { start: number; end: number; value: number; raw: string; percent: boolean; count: boolean; word: boolean };
@@ -519,7 +568,12 @@ function comparatorBefore(gap: string): Comparator | null {
     if (/exceed|above|greater|higher/.test(word)) return ">";
     return "<";
   }
-  if (/(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?)\s*$/.test(g)) return "=";
+  if (
+    /(?:was|were|is|are|of|reached|amounted to|equal(?:led|s)?(?: to)?|(?:set|fixed|adjusted|corrected|reduced|lowered) (?:at|to))\s*$/.test(
+      g,
+    )
+  )
+    return "=";
   return null;
 }
 
@@ -552,12 +606,25 @@ export function lastStatistic(sentence: string): StatisticKey | null {
   return findMentions(sentence).at(-1)?.key ?? null;
 }
 
+// Pasted software output, formulas and table rows give no statement (label rule 18): a formula has
+// function calls or operators between symbols; an output line or table row has (almost) no prose words
+// and is laid out in columns, or has no sentence end.
+const FORMULA = /\b(?:sqrt|sum|max|min|log|ln|exp|var)\s*\(|[\w)]\s*[*\/^]\s*\(|\(\s*\w+\s*[-−+]\s*\w+\s*\)\s*[*\/^]/i;
+function pastedOutput(sentence: string): boolean {
+  if (FORMULA.test(sentence) && !/\b(?:was|were|is|are|computed|calculated|defined)\b/i.test(sentence)) return true;
+  const prose = sentence.match(/(?<![\w-])[a-z]{3,}(?![\w-])/g) ?? [];
+  const columns = / {3,}|\t|\|/.test(sentence);
+  const ended = /[.!?]["'”’)]?\s*$/.test(sentence.trim());
+  return prose.length < 2 && (columns || !ended) && /\d/.test(sentence);
+}
+
 export function extractStatements(
   sentence: string,
   matchProcedure: (s: string) => ProcedurePattern | null,
   ctx: SentenceContext = {},
 ): RawStatement[] {
   const out: RawStatement[] = [];
+  if (pastedOutput(sentence)) return out;
   const proc = matchProcedure(sentence);
   if (proc)
     out.push({ kind: "procedure", statistic: null, comparator: null, value: null, framing: null, procedure: proc.key });
@@ -565,6 +632,8 @@ export function extractStatements(
   // Take out confidence intervals and bracketed ranges: their bounds are not values of their own.
   const s = sentence
     .replace(/\(?\s*\b(?:9[059]|99)\s*%\s*(?:CI|confidence interval)\s*[\[(]?[-−.\d\s,–]+[\])]?\s*\)?/gi, " ")
+    // a bracketed interval right after a value: "RMSEA = .052 [.041, .063]"
+    .replace(/(\d)\s*\[\s*[-−]?\d*\.\d+\s*[,;–-]\s*[-−]?\d*\.\d+\s*\]/g, (m, d) => d + " ".repeat(m.length - 1))
     .replace(/\bICC\s*\((\d)(?:,\s*(\d))?\)/g, "ICC")
     .replace(/\b(?:19|20)\d{2}\b/g, (y) => " ".repeat(y.length));
   const mentions = findMentions(s);
@@ -583,10 +652,24 @@ export function extractStatements(
     ctx.previousStatistic &&
     ctx.previousStatistic !== "other" &&
     THRESHOLD_CUE.test(s) &&
+    !/\bsignifican/i.test(s) &&
     !/\b(?:items?|participants|respondents)\b/i.test(s)
   ) {
     // "Values above .90 indicate excellent fit." continues the statistic named just before.
     const m = /\b(?:values?|coefficients?|estimates?)\b(?=[^.;]{0,30}?\d)/i.exec(s);
+    if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
+  } else if (
+    !mentions.length &&
+    ctx.previousStatistic &&
+    ctx.previousStatistic !== "other" &&
+    !/\bsignifican/i.test(s)
+  ) {
+    // "The coefficient for the full scale was 0·82" after a sentence on Cronbach's alpha: a noun that
+    // points back names the statistic of the sentence before (label rule 6)
+    const m =
+      /\b(?:the|this|that|its|their|each)\s+(?:\w+\s+)?(?:coefficients?|values?|index|indices|estimates?|statistics?)\b(?=[^.;\d]{0,40}?(?:\bwas|\bwere|=|\bof|\bis|\breached)\s*[-−]?(?:0?[.·]\d|\d))/i.exec(
+        s,
+      );
     if (m) mentions.push({ start: m.index, end: m.index + m[0].length, key: ctx.previousStatistic });
   }
   const nums = findNumbers(s).filter((n) => !mentions.some((m) => n.start >= m.start && n.start < m.end));
@@ -598,7 +681,10 @@ export function extractStatements(
   // "f² values of 0.02, 0.15 and 0.35 represent small, medium and large effects": a graded scale
   const gradedValues =
     levelWords.size >= 2 &&
-    /(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) &&
+    (/(?:\d|\.\d)\s*,\s*(?:0?\.\d|\d)[^.;]*\band\s+(?:0?\.\d|\d)/.test(s) ||
+      (s.match(
+        /\d\s*(?:is|are|as|=|:)?\s*(?:small|medium|large|weak|moderate|strong|poor|fair|good|excellent|acceptable|substantial)\b/gi,
+      )?.length ?? 0) >= 3) &&
     !/\b(?:was|were|obtained|observed|yielded)\b/i.test(s);
   // Evaluative words alone ("was satisfactory, with alphas between .74 and .88") describe a result
   // when the sentence speaks in the past of its own data; a rule needs more than praise.
@@ -609,11 +695,30 @@ export function extractStatements(
   const sentenceThreshold =
     (THRESHOLD_CUE.test(s) && ruleCue) || (disputed && (CUT_NOUN_AFTER.test(s) || CUT_NOUN.test(s))) || gradedValues;
   const sentenceReported = REPORTED_CUE.test(s);
-  const contextual = CONTEXT_CUE.test(s) || levelWords.size >= 2;
+  // A graded scale (".60 questionable, .70 acceptable, .80 good") is a general rule: its grades are
+  // not situations, and its "whereas"/"while" joins grades, not contexts (label rules 12 and 14).
+  const graded = levelWords.size >= 2;
+  const contextual = CONTEXT_CUE.test(graded ? s.replace(/\b(?:whereas|while)\b/gi, " ") : s);
   const framing = disputed ? "disputed" : contextual ? "contextual" : "fixed";
   const hasCitation = ctx.hasCitation ?? /\((?:[^()]*\d{4}[^()]*)\)|\[\d+/.test(sentence);
   const resultSig = isResultSignificance(s);
 
+  // "Rather than the usual VIF cut-off of 10, we used a stricter limit of 3.3": the value set aside is
+  // disputed, the replacement adopted is a fixed threshold (label rule 15)
+  const ratherThan = /\b(?:rather than|instead of|in place of)\b/i.exec(s);
+  const numberFraming = (at: number): RawStatement["framing"] => {
+    if (!ratherThan) return framing;
+    const phraseEnd = s.slice(ratherThan.index).search(/[,;]|\bwe\b/i);
+    const phrase = s.slice(ratherThan.index, phraseEnd < 0 ? s.length : ratherThan.index + phraseEnd);
+    if (!/\d/.test(phrase)) return framing;
+    const inPhrase = at > ratherThan.index && (phraseEnd < 0 || at < ratherThan.index + phraseEnd);
+    if (inPhrase) return "disputed";
+    return disputed
+      ? "fixed"
+      : CONTEXT_CUE.test(s.replace(/\bstricter\b|\bmore liberal\b/gi, " "))
+        ? "contextual"
+        : "fixed";
+  };
   type Cand = RawStatement & { at: number };
   const cands: Cand[] = [];
   const usedValues = new Map<string, number>();
@@ -640,12 +745,34 @@ export function extractStatements(
 
   // "80% power", "a power of .80": power written before its number is handled by the general rule;
   // "NN% power" has the number first.
-  for (const m of s.matchAll(/(\d+(?:\.\d+)?)\s*%\s*(?:statistical\s+)?power/gi)) {
-    const value = Number(m[1]) / 100;
+  for (const m of s.matchAll(
+    /(\d+(?:\.\d+)?)\s*%\s*(?:statistical\s+)?power|(?<=\bpowered (?:at|to|for) )(\d+(?:\.\d+)?)\s*%/gi,
+  )) {
+    const value = Number(m[1] ?? m[2]) / 100;
+    const words = comparatorBefore(s.slice(Math.max(0, m.index! - 40), m.index!));
+    // power the design obtained ("the final design had 87% power") is a result (label rule 2)
+    if (
+      /\b(?:had|has|achieved|provided|yielded|gave|obtained|actual|observed|resulting)\s+(?:a\s+|an\s+)?(?:\w+\s+)?$/i.test(
+        s.slice(Math.max(0, m.index! - 30), m.index!),
+      ) &&
+      !/\b(?:would|designed|a priori|plann\w*|required|needed|set|to achieve|to ensure)\b/i.test(s)
+    ) {
+      cands.push({
+        kind: "reported",
+        statistic: "statistical_power",
+        comparator: "=",
+        value,
+        framing: null,
+        procedure: null,
+        at: m.index!,
+      });
+      continue;
+    }
     cands.push({
       kind: "threshold",
       statistic: "statistical_power",
-      comparator: ">=",
+      // "designed to have 80% power" is a design value (=); "at least 80% power", "80% power is recommended" a rule
+      comparator: words && words !== "=" ? words : POWER_RULE.test(s) || disputed ? ">=" : "=",
       value,
       framing,
       procedure: null,
@@ -657,7 +784,9 @@ export function extractStatements(
   const pThresholdSentence =
     /\b(?:consider|regard|deem|treat|accept|defin|interpret|judg|tak)\w*|\bas (?:marginally )?significant\b|\bset (?:at|to)\b|\bused as\b|\badopted\b|\bthresholds?\b|\bcut[-\s]?offs?\b|\bcriteri\w+|\bconvention\w*|\bto (?:show|indicate|denote)\b|\bsignifican\w+ (?:level|threshold)|\blevel of significance|\bsignificance level|\balpha level|\btwo[-\s](?:tailed|sided)\b|\b(?:was|were) (?:used|applied|employed|chosen)\b|\bBonferroni\b|\b(?:corrected|adjusted) (?:alpha|α|significance|p)\b/i.test(
       s,
-    ) || disputed;
+    ) ||
+    disputed ||
+    /\b(?:dropped|removed|deleted|excluded|eliminated|retained|kept)\b/i.test(s);
   for (const m of s.matchAll(pCut)) {
     if (!pThresholdSentence) continue;
     cands.push({
@@ -670,6 +799,77 @@ export function extractStatements(
       at: m.index!,
     });
   }
+  const consumed = new Set<number>();
+  // A required sample size computed in this study ("a power analysis indicated that 146 participants
+  // would be required", "the required sample was 212") is a reported minimum sample size (label rule 2).
+  if (
+    /\b(?:power analys[ie]s|sample size (?:calculation|estimation|determination)|calculat\w*|comput\w*|estimat\w*|indicated|showed|revealed|yielded|suggested|required sample|was required|were required|were needed|was needed)\b/i.test(
+      s,
+    )
+  ) {
+    const computed = [
+      /\b(\d[\d,]*)\s+(?:participants|respondents|subjects|cases|patients|students|people|observations|households|individuals|pharmacies|schools|firms|teachers|nurses|children|adults|employees)\s+(?:per (?:group|arm|condition)\s+|in total\s+)?(?:would be|were|was|are|is|would have been)\s+(?:required|needed|necessary|sufficient)\b/gi,
+      /\b(?:required|necessary|needed|target) (?:total )?sample(?: size)?\s+(?:was|of|=|is|would be)\s+(?:N\s*=\s*)?(?:approximately\s+|about\s+)?(\d[\d,]*)\b/gi,
+      /\b(?:required|need(?:ed)?) (?:a (?:total )?(?:sample(?: size)?|minimum) of\s+)(\d[\d,]*)\b/gi,
+    ];
+    for (const re of computed)
+      for (const m of s.matchAll(re)) {
+        const value = Number(m[1].replace(/,/g, ""));
+        if (!(value >= 2 && value <= 1e6)) continue;
+        if (cands.some((c) => c.statistic === "minimum_sample_size" && c.value === value)) continue;
+        cands.push({
+          kind: "reported",
+          statistic: "minimum_sample_size",
+          comparator: "=",
+          value,
+          framing: null,
+          procedure: null,
+          at: m.index!,
+        });
+        usedValues.set(`reported:minimum_sample_size:=:${value}`, 1);
+        consumed.add(m.index! + m[0].lastIndexOf(m[1]));
+      }
+  }
+
+  // "one time in twenty", "at the five percent level", "values less than 0.05 were considered
+  // statistically significant": a significance level written in words (label rule 16)
+  if (!resultSig && /\bsignifican\w*/i.test(s) && !mentions.some((m) => m.key === "p_value")) {
+    const words =
+      /\b(?:at the|a) (one|five|ten) (?:percent|per cent) (?:significance )?level\b|\bone (?:time |chance )?in (twenty|a hundred|one hundred|ten)\b/i.exec(
+        s,
+      );
+    const plain =
+      /\b(?:values?|results?|differences?|effects?|estimates?)\s+(less than|lower than|smaller than|below|under|≤|<)\s*(0?\.\d+)\s+(?:were|was|are|is)\s+(?:considered|regarded|deemed|taken|treated|interpreted)/i.exec(
+        s,
+      );
+    if (words) {
+      const v = words[1]
+        ? ({ one: 0.01, five: 0.05, ten: 0.1 } as Record<string, number>)[words[1].toLowerCase()]
+        : 1 /
+          ({ twenty: 20, "a hundred": 100, "one hundred": 100, ten: 10 } as Record<string, number>)[
+            words[2].toLowerCase()
+          ];
+      cands.push({
+        kind: "threshold",
+        statistic: "p_value",
+        comparator: words[1] ? "=" : "<",
+        value: v,
+        framing,
+        procedure: null,
+        at: words.index,
+      });
+    } else if (plain && Number(plain[2]) <= 0.1)
+      cands.push({
+        kind: "threshold",
+        statistic: "p_value",
+        comparator: /≤/.test(plain[1]) ? "<=" : "<",
+        value: Number(plain[2]),
+        framing,
+        procedure: null,
+        at: plain.index,
+      });
+  }
+
   // "at the .05 level", "at the 5% level"
   for (const m of s.matchAll(/\bat the (0?\.\d+|\d+\s*%)\s*(?:significance\s+)?level/gi)) {
     if (resultSig) continue;
@@ -677,7 +877,7 @@ export function extractStatements(
     cands.push({
       kind: "threshold",
       statistic: "p_value",
-      comparator: "<",
+      comparator: "=", // a significance level as a setting (label rule 10)
       value: v,
       framing,
       procedure: null,
@@ -691,6 +891,20 @@ export function extractStatements(
     /\b(?:explain\w*|accounted for|accounts for|account for)\s+(?:only\s+|about\s+|approximately\s+|around\s+|nearly\s+|almost\s+|roughly\s+|some\s+)?(\d+(?:\.\d+)?)\s*(?:%|percent\b|per cent\b)\s+of\s+(?:the\s+)?(?:total\s+|overall\s+)?variance/gi,
   )) {
     const subject = s.slice(0, m.index);
+    if (/\b(?:factors?|components?|dimensions?)\b/i.test(subject) && !/\b(?:ICC|intraclass|method)\b/i.test(subject)) {
+      // variance explained by factors or components is an 'other' statistic (label rule 17)
+      cands.push({
+        kind: "reported",
+        statistic: "other",
+        statistic_label: "variance explained",
+        comparator: "=",
+        value: Number(m[1]) / 100,
+        framing: null,
+        procedure: null,
+        at: m.index!,
+      });
+      continue;
+    }
     if (/\b(?:factors?|components?|dimensions?|eigen\w*|ICC|intraclass|method)\b/i.test(subject)) continue;
     const value = Number(m[1]) / 100;
     const already =
@@ -714,6 +928,7 @@ export function extractStatements(
   >();
   for (let ni = 0; ni < nums.length; ni++) {
     const n = nums[ni];
+    if (consumed.has(n.start)) continue;
     if (
       /^\s*(?:%\s*)?(?:power\b|(?:cases|respondents|participants|observations|subjects|people|events)\s+(?:per|for each|for every)\b)/i.test(
         s.slice(n.end, n.end + 30),
@@ -725,7 +940,11 @@ export function extractStatements(
     if (n.raw === "0" && /^\.\s*$/.test(s.slice(n.end))) continue;
     const blocked = BLOCKER.test(before.slice(-24)) && !/1\s*[-−–]\s*β\s*=\s*$/.test(before);
     if (/\bp\s*[<=>≤≥]\s*$/i.test(before) || /\bat the\s*$/i.test(before)) continue;
-    if (/^\s*[-–]?(?:point|item|year|day|week|month|hour|minute|factor|wave)s?\b/i.test(s.slice(n.end, n.end + 12)))
+    if (
+      /^\s*[-–]?(?:point|item|year|day|week|month|hour|minute|factor|wave)s?\b(?!\s+(?:to|towards)\b)/i.test(
+        s.slice(n.end, n.end + 16),
+      )
+    )
       continue;
     // the statistic this number belongs to: the nearest mention before it, within the sentence part
     // that has no other number-bearing mention in between.
@@ -777,12 +996,13 @@ export function extractStatements(
           value: v,
           framing: null,
           procedure: null,
+          ...(k === "other" ? { statistic_label: mention.label ?? null } : {}),
           at: n.start,
         });
     };
     for (const g of group) {
       let key = g.key;
-      const value = n.percent ? n.value / 100 : n.value;
+      const value = n.percent ? Number((n.value / 100).toFixed(10)) : n.value;
       if (n.count && !COUNT_KEYS.has(key)) continue;
       // A number word is a value only with a comparator or "of" before it ("above zero", "at least ten").
       if (
@@ -794,7 +1014,16 @@ export function extractStatements(
         continue;
       // an effect size given with its test ("d = 0.21, p = .04") is a result, like the p-value beside it
       // (and the d assumed in a power analysis is neither a rule nor a result)
-      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d|\bpower\b|\bto detect\b/i.test(s)) continue;
+      if (key === "cohen_d" && /\bp\s*[=<>≤]|\b[tF]\s*\(\s*\d/i.test(s)) continue;
+      // an effect size assumed or expected in planning is a design value ("d = 0.6 expected",
+      // "f² = 0.15 was assumed"; label rule 10): "=", or ">=" for the smallest effect of interest
+      const designEffect =
+        (key === "cohen_d" || key === "f_squared") &&
+        (/\b(?:assum\w*|expect\w*|anticipat\w*|hypothesi[sz]ed|to detect|smallest effect|minimum effect|power analys[ie]s|plann\w*)\b/i.test(
+          s,
+        ) ||
+          SAMPLE_SIZE_CALC.test(s)) &&
+        !/\b(?:obtained|observed|found|yielded|showed)\b/i.test(s);
       // a named statistic of no tracked kind counts only with a rule or a plain "was"/"=" value
       if (g.generic && !sentenceThreshold && !/(?:=|\bwas|\bwere|\bof)\s*$/i.test(gap)) continue;
       // "an alpha level of .70": a significance level is never that large, so it is a scale's alpha
@@ -814,9 +1043,24 @@ export function extractStatements(
         continue;
       // values at the bounds of a statistic's scale, explained: "kappa equals 1 for perfect agreement"
       if ((value === 0 || value === 1 || value === -1) && BOUND_MEANING.test(s) && key !== "q_squared") continue;
-      if (n.percent && key !== "p_value" && key !== "statistical_power") continue;
+      // percentages of proportion statistics are proportions (label rule 16)
+      if (
+        n.percent &&
+        key !== "p_value" &&
+        key !== "statistical_power" &&
+        key !== "r_squared" &&
+        key !== "ave" &&
+        !(
+          key === "other" && /response rate|coefficients? of variation|missing|agreement/i.test(s.slice(g.start, g.end))
+        )
+      )
+        continue;
       if (BOUNDED.has(key) && (value < 0 || value > 1)) continue;
-      if (key === "minimum_sample_size" ? value < 2 || value > 1e6 : !BOUNDED.has(key) && (value < 0 || value > 1000))
+      if (
+        key === "minimum_sample_size"
+          ? value < 2 || value > 1e6
+          : !BOUNDED.has(key) && ((value < 0 && key !== "skewness" && key !== "kurtosis") || value > 1000)
+      )
         continue;
       if (key === "minimum_sample_size" && !sentenceThreshold) continue;
       // a sample's own size is not a statistic; only the minimum asked for counts
@@ -847,6 +1091,20 @@ export function extractStatements(
         !!prevNum &&
         /^\s*(?:and|to|[-–])\s*$/.test(s.slice(prevNum.end, n.start)) &&
         RANGE_OF.test(s.slice(Math.max(0, prevNum.start - 60), prevNum.start));
+      // "Alpha was .86, above the .70 level": an obtained value compared with a criterion
+      const comparing =
+        /\b(above|below|over|under|exceed\w*|surpass\w*|beyond|meet\w*|clear of|short of|within)\s+the\s+((?:[\w-]+\s+){0,4}?)(?:of\s+)?$/i.exec(
+          gap,
+        );
+      const comparedWithCut =
+        cands.some((c) => c.kind === "reported" && c.statistic === key) &&
+        !!comparing &&
+        (/\b(?:level|threshold|cut[-\s]?off|criterion|benchmark|limit|standard|mark|minimum|maximum|rule|guideline|recommendation|value)\b/i.test(
+          comparing[2],
+        ) ||
+          /^\s*(?:level|threshold|cut[-\s]?off|criterion|benchmark|limit|standard|mark|minimum|maximum|rule|guideline|recommendation)\b/i.test(
+            after,
+          ));
       let kind: "threshold" | "reported";
       const prevSame = lastByMention.get(mention);
       const listGap = prevSame ? s.slice(prevSame.end, n.start) : "";
@@ -867,7 +1125,20 @@ export function extractStatements(
         pushRangeEnd(key, value);
         continue;
       }
-      if (continuesList && prevSame) {
+      // "The composite reliability coefficients (0.81–0.93) exceeded …": a bracketed range of obtained values
+      const bracketRangeStart =
+        /^\s*(?:(?:values?|coefficients?|estimates?|scores?)\s*)?\(\s*$/i.test(gap) &&
+        /^\s*[-–]\s*[-−]?\d*[.·]?\d+\s*\)/.test(after) &&
+        !CUT_NOUN.test(gap);
+      const bracketRangeEnd =
+        !!prevNum &&
+        /^\s*[-–]\s*$/.test(s.slice(prevNum.end, n.start)) &&
+        /^\s*\)/.test(after) &&
+        cands.some((c) => c.kind === "reported" && c.statistic === key && c.at === prevNum.start);
+      if (bracketRangeStart || bracketRangeEnd) {
+        kind = "reported";
+        comparator = "=";
+      } else if (continuesList && prevSame) {
         kind = prevSame.kind;
         if (kind === "reported" || !comparator || comparator === "=") comparator = prevSame.comparator;
       } else if (key === "p_value") {
@@ -877,11 +1148,23 @@ export function extractStatements(
       else if (
         key === "statistical_power" &&
         PLANNING.test(s) &&
-        !/(?:=|\bwas|\bwere)\s*$/i.test(gap) &&
+        (!/(?:=|\bwas|\bwere)\s*$/i.test(gap) || SAMPLE_SIZE_CALC.test(s)) &&
         !/\b(?:achieved|observed|obtained|post[-\s]?hoc|actual|showed|provided|yielded|gave)\b/i.test(s)
       )
         kind = "threshold";
-      else if (cutBefore) kind = "threshold";
+      else if (cutBefore) {
+        kind = "threshold";
+        if (comparedWithCut) comparator = null;
+      } else if (designEffect) {
+        kind = "threshold";
+        comparator = /\b(?:smallest|minimum|minimal) effect\b/i.test(s) ? ">=" : "=";
+      }
+      // "…, above the .70 level", "well clear of the 5 limit": the criterion the obtained value is
+      // compared with; its comparator follows the statistic's polarity (label rule 9)
+      else if (comparedWithCut) {
+        kind = "threshold";
+        comparator = null;
+      }
       // "Two image items with loadings of 0.38 and 0.41 were removed": item-level values, neither a
       // rule nor a result of the scale
       else if (
@@ -917,8 +1200,23 @@ export function extractStatements(
       else if (sentenceThreshold || (hasCitation && comparator && comparator !== "=")) kind = "threshold";
       else kind = "reported";
 
+      // a statistic of no known polarity passes on the side the obtained value lies
+      if (
+        comparedWithCut &&
+        kind === "threshold" &&
+        (key === "other" || (!BOUNDED.has(key) && !HIGHER_IS_WORSE.has(key) && key !== "first_stage_f"))
+      )
+        comparator = /^(?:below|under|short of|within)/i.test(comparing![1]) ? "<=" : ">=";
+      const written = comparator;
       if (kind === "threshold") {
-        if (!comparator || comparator === "=")
+        // A design value stated as a setting ("α = .05", "an alpha level of .01", "a power of .80 was
+        // used to plan") keeps "="; a bare criterion takes the statistic's polarity (label rules 9, 10).
+        const designValue =
+          comparator === "=" &&
+          (key === "p_value" || (key === "statistical_power" && !POWER_RULE.test(s))) &&
+          !disputed;
+        if (designValue || (designEffect && comparator === "=")) comparator = "=";
+        else if (!comparator || comparator === "=")
           comparator = key === "p_value" ? "<" : HIGHER_IS_WORSE.has(key) ? "<=" : ">=";
         if (key === "p_value" && comparator === "<=" && !/≤|<=|or less|or lower/.test(gap + after.slice(0, 12)))
           comparator = "<";
@@ -930,7 +1228,7 @@ export function extractStatements(
       }
       // Ranges: "between X and Y", "X to Y"
       const rangeBefore = /\bbetween\s*$/i.test(gap) || /\bfrom\s*$/i.test(gap);
-      const rangeAfter = /^\s*(?:and|to|[-–])\s*(0?\.\d+|\d+(?:\.\d+)?)/i.exec(after);
+      const rangeAfter = /^\s*(?:and|to|[-–])\s*\+?(0?\.\d+|\d+(?:\.\d+)?)/i.exec(after);
       const prevGap = prevNum ? s.slice(prevNum.end, n.start) : "";
       const isRangeEnd =
         (prevNum &&
@@ -943,25 +1241,75 @@ export function extractStatements(
       ) {
         // only a range said to be one ("ranged between"): "values between .56 and .74 confirmed" is not
         if (/\b(?:ranged?|ranging)\b/i.test(s.slice(g.end, n.start))) pushRangeEnd(key, value);
+        // "(α = .76–.91)", "(.62–.88)": a range of obtained values reports both ends (label rule 4)
+        else if (
+          isRangeEnd &&
+          /^\s*[-–]\s*$/.test(prevGap) &&
+          cands.some((c) => c.kind === "reported" && c.statistic === key && c.at === prevNum!.start)
+        )
+          cands.push({
+            kind: "reported",
+            statistic: key,
+            comparator: "=",
+            value,
+            framing: null,
+            procedure: null,
+            ...(key === "other" ? { statistic_label: g.label ?? null } : {}),
+            at: n.start,
+          });
         continue;
       }
       if (kind === "threshold" && withinRange) comparator = ">=";
       else if (kind === "threshold" && rangeEndOfRecommended) comparator = "<=";
       else if (kind === "threshold" && rangeBefore && rangeAfter) {
-        if (HIGHER_IS_WORSE.has(key)) continue; // lower bound of a "lower is better" band says little
+        // an acceptable range gives both ends (label rule 11); the lower end of a "lower is better"
+        // band in a graded scale adds nothing
+        if (HIGHER_IS_WORSE.has(key) && graded) continue;
         comparator = ">=";
       } else if (kind === "threshold" && isRangeEnd) {
-        if (!/\bbetween\s*$/i.test(s.slice(Math.max(0, prevNum!.start - 12), prevNum!.start))) continue; // "X to Y": lower bound only
+        // "X to Y" (not "between"): read as a band's lower end only; the upper end of a graded band adds
+        // no boundary (label rule 12), and held-out figures got worse when every "X to Y" gave both ends
+        if (!/\bbetween\s*$/i.test(s.slice(Math.max(0, prevNum!.start - 12), prevNum!.start))) continue;
         if (/\b(?:lower (?:limit|bound|end)|minimum|floor)\b/i.test(s)) continue; // the band is a minimum
         const repeated = nums.some((x) => x !== n && x !== prevNum && Math.abs(x.value - n.value) < 1e-9);
         if (!HIGHER_IS_WORSE.has(key) && repeated) continue;
         comparator = "<=";
       }
+      // "McDonald's omega reached .89": an obtained value, not a bound
+      if (kind === "reported" && comparator === ">=" && /\breach(?:ed|es)?\s*$/i.test(gap)) comparator = "=";
       // "None of the VIFs exceeded 2.1" (<= 2.1), "No loading was lower than .55" (>= .55)
-      if (/\b(?:no|none of the|not one|not a single|not any)\s*$/i.test(s.slice(0, g.start))) {
+      if (
+        /\b(?:no|none of the|not one|not a single|not any)\s*$/i.test(s.slice(0, g.start)) ||
+        /\b(?:no|none of the|not one|not a single)\s+[\w-]+\s+(?:had|has|have|showed|shows|with)\s+(?:a|an|any)?\s*$/i.test(
+          s.slice(0, g.start),
+        )
+      ) {
         if (comparator === ">") comparator = "<=";
         else if (comparator === "<") comparator = ">=";
       }
+      if (
+        kind === "threshold" &&
+        written &&
+        written !== "=" &&
+        comparator === written &&
+        !disputed &&
+        !NEGATED.some(([re]) => re.test(gap.toLowerCase()))
+      ) {
+        const clause = clauseAround(s, n.start, n.end);
+        if (FAILING_SIDE.test(clause) && !PASSING_SIDE.test(clause)) comparator = FLIP[comparator];
+      }
+      // a graded scale's lowest band written only as "< x" ("less than 0.5 poor") adds no boundary of its own
+      if (
+        kind === "threshold" &&
+        graded &&
+        key !== "p_value" &&
+        (HIGHER_IS_WORSE.has(key)
+          ? comparator === ">" || comparator === ">="
+          : comparator === "<" || comparator === "<=") &&
+        !/^\s*(?:and|to|[-–])/.test(after) &&
+        !isRangeEnd
+      )
+        continue;
       lastByMention.set(mention, { kind, comparator, end: n.end });
       const dedupeKey = `${kind}:${key}:${comparator}:${value}`;
       if (kind === "threshold" && usedValues.has(dedupeKey)) continue;
@@ -971,7 +1319,7 @@ export function extractStatements(
         statistic: key,
         comparator,
         value,
-        framing: kind === "threshold" ? framing : null,
+        framing: kind === "threshold" ? numberFraming(n.start) : null,
         procedure: null,
         ...(key === "other" ? { statistic_label: g.label ?? null } : {}),
         at: n.start,

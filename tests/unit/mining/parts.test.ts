@@ -188,9 +188,9 @@ describe("text repair", () => {
 });
 
 describe("statements: hard cases", () => {
-  it("significance alpha is a p_value level, coefficient alpha is cronbach_alpha", () => {
+  it("significance alpha is a p_value level (a setting, so =, label rule 10), coefficient alpha is cronbach_alpha", () => {
     expect(stmts("The alpha level was set at .05.")).toMatchObject([
-      { kind: "threshold", statistic: "p_value", comparator: "<", value: 0.05 },
+      { kind: "threshold", statistic: "p_value", comparator: "=", value: 0.05 },
     ]);
     expect(stmts("Tests used α = .05.")[0]).toMatchObject({ statistic: "p_value", value: 0.05 });
     expect(stmts("Coefficients were tested at the .01 level.")[0]).toMatchObject({ statistic: "p_value", value: 0.01 });

@@ -74,7 +74,7 @@ describe("named statistics outside the closed list become 'other' with their lab
   });
   it("the new keys are their own statistics, not 'other'", () => {
     expect(briefs("A first-stage F above 10 was required.")).toEqual(["threshold first_stage_f > 10 fixed"]);
-    expect(briefs("Tolerance values below 0.10 indicate collinearity.")).toEqual(["threshold tolerance < 0.1 fixed"]);
+    expect(briefs("Tolerance values below 0.10 indicate collinearity.")).toEqual(["threshold tolerance >= 0.1 fixed"]);
     expect(briefs("A Q² above zero indicates predictive relevance.")).toEqual(["threshold q_squared > 0 fixed"]);
     expect(briefs("The difference amounted to d = 0.41.")).toEqual(["reported cohen_d = 0.41 -"]);
     expect(briefs("A minimum sample size of 200 is often recommended for such models.")).toEqual([
@@ -87,8 +87,8 @@ describe("named statistics outside the closed list become 'other' with their lab
 });
 
 describe("significance alpha versus a scale's alpha, and kappa written K", () => {
-  it("an alpha level in a testing context is a significance level", () => {
-    expect(briefs("All tests were two-tailed with an alpha level of .01.")).toEqual(["threshold p_value < 0.01 fixed"]);
+  it("an alpha level in a testing context is a significance level, a design value with = (label rule 10)", () => {
+    expect(briefs("All tests were two-tailed with an alpha level of .01.")).toEqual(["threshold p_value = 0.01 fixed"]);
   });
   it("an alpha level in a reliability context is Cronbach's alpha", () => {
     expect(
@@ -123,10 +123,10 @@ describe("kind: what the number does decides", () => {
     ]);
     expect(briefs("The obtained KMO of .92 is excellent.")).toEqual(["reported kmo = 0.92 -"]);
   });
-  it("an obtained value above a required level is a reported value and a cut-off", () => {
+  it("an obtained value above a required level is a reported value and a cut-off, whose comparator the comparing word does not change (label rule 9)", () => {
     expect(briefs("The alpha of the crafting scale was .78, exceeding the required level of .70.")).toEqual([
       "reported cronbach_alpha = 0.78 -",
-      "threshold cronbach_alpha > 0.7 fixed",
+      "threshold cronbach_alpha >= 0.7 fixed",
     ]);
   });
   it("a value within a recommended range is reported, and the range is a cut-off band", () => {
@@ -138,17 +138,19 @@ describe("kind: what the number does decides", () => {
   });
   it("a power used to plan is a design cut-off; a percentage of power is a proportion", () => {
     expect(briefs("A power of .80 was used to plan the sample size.")).toEqual([
-      "threshold statistical_power >= 0.8 fixed",
+      "threshold statistical_power = 0.8 fixed",
     ]);
     expect(briefs("The sample size was planned for a power of 80% to detect small effects.")).toEqual([
-      "threshold statistical_power >= 0.8 fixed",
+      "threshold statistical_power = 0.8 fixed",
     ]);
   });
-  it("a share of variance explained is a reported R² (27% = .27), but not a factor's share", () => {
+  it("a share of variance explained is a reported R² (27% = .27), and a factor's share is an 'other' statistic (label rule 17)", () => {
     expect(briefs("The twelve predictors accounted for 27% of the variance in strain.")).toEqual([
       "reported r_squared = 0.27 -",
     ]);
-    expect(briefs("The first factor accounted for 27% of the variance.")).toEqual([]);
+    expect(briefs("The first factor accounted for 27% of the variance.")).toEqual([
+      "reported other = 0.27 - [variance explained]",
+    ]);
   });
   it("number words and ratio forms are values", () => {
     expect(briefs("At least ten cases per indicator were required for the factor analysis.")).toEqual([
@@ -176,5 +178,22 @@ describe("kind: what the number does decides", () => {
     expect(briefs("The KMO was 0. 88 for the tolerance items.")).toEqual(["reported kmo = 0.88 -"]);
     expect(briefs("Loadings should exceed 0.5.21–23.")).toEqual(["threshold factor_loading > 0.5 fixed"]);
     expect(briefs("A minimum omega of 0.80 [24–26] was adopted.")).toEqual(["threshold mcdonald_omega >= 0.8 fixed"]);
+  });
+});
+
+// The annotation manual's rule 18 (label-rules.md of the held-out set's manual): every line of pasted
+// software output, formula or table row gives nothing, even with a statistic name and a value.
+describe("pasted output, formulas and table rows give no statement", () => {
+  it.each([
+    "CFI = 0.948, TLI = 0.937, RMSEA = 0.058 [0.049, 0.067], SRMR = 0.044",
+    "Comparative Fit Index (CFI)                    0.948",
+    "omega = (sum(lambda))^2 / ((sum(lambda))^2 + sum(theta))",
+    "Cronbach's Alpha    N of Items    .874    12",
+  ])("%s", (line) => expect(briefs(line)).toEqual([]));
+  it("a prose sentence with the same values still reports them, without its interval's bounds", () => {
+    expect(briefs("The comfort model fitted well, with RMSEA = .052 [.041, .063] and CFI = .957.")).toEqual([
+      "reported rmsea = 0.052 -",
+      "reported cfi = 0.957 -",
+    ]);
   });
 });
