@@ -1,3 +1,4 @@
+import { TRAIL_ENDS } from "@/lib/vocabulary";
 import { sql } from "kysely";
 import type { DB } from "@/db";
 import { wilson, newcombeDifference, cochranArmitage } from "@/lib/stats";
@@ -110,16 +111,8 @@ export async function practiceOverTime(db: DB, f: Filters): Promise<Dashboard> {
   return { practice, tables: trend ? { byYear: table, trend } : { byYear: table }, notes };
 }
 
-export const END_KINDS = [
-  "methods_source",
-  "empirical_precedent",
-  "unclassified",
-  "unresolved",
-  "no_citation",
-  "cycle",
-  "depth_limit",
-  "not_built",
-] as const;
+// The trail ends of the vocabulary, plus the dashboards' own "trail not built yet".
+export const END_KINDS = [...TRAIL_ENDS, "not_built"] as const;
 
 type TopWork = {
   work_id: string;

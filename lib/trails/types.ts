@@ -1,4 +1,6 @@
-export type WorkType = "methods_source" | "empirical" | "unknown";
+import { TRAIL_ENDS, type TrailEnd as VocabularyTrailEnd, type WorkType as VocabularyWorkType } from "@/lib/vocabulary";
+
+export type WorkType = VocabularyWorkType;
 
 export interface TrailWork {
   id: string;
@@ -56,19 +58,10 @@ export interface TrailGraph {
  * - cycle: a citation back to an article already on the current path;
  * - depth_limit: the chain went on past opts.maxDepth.
  */
-export type TrailEndKind =
-  "methods_source" | "empirical_precedent" | "unclassified" | "unresolved" | "no_citation" | "cycle" | "depth_limit";
+export type TrailEndKind = VocabularyTrailEnd;
 
-/** Order used for the summary end: the firmest footing the claim reaches comes first. */
-export const END_PRIORITY: readonly TrailEndKind[] = [
-  "methods_source",
-  "empirical_precedent",
-  "unclassified",
-  "unresolved",
-  "no_citation",
-  "cycle",
-  "depth_limit",
-];
+/** Order used for the summary end: the firmest footing the claim reaches comes first (the vocabulary's order). */
+export const END_PRIORITY: readonly TrailEndKind[] = TRAIL_ENDS;
 
 export interface TrailEnd {
   kind: TrailEndKind;
