@@ -19,7 +19,7 @@ const SHA256 = /^[0-9a-f]{64}$/;
 export const FILE_MODE = 0o600;
 export const DIR_MODE = 0o700;
 
-export function folderStorage(dir = path.join(process.cwd(), ".data", "files")): FileStorage {
+export function folderStorage(dir = path.join(/*turbopackIgnore: true*/ process.cwd(), ".data", "files")): FileStorage {
   const root = path.resolve(dir);
   // Two levels of fan-out keep any one folder small once the corpus has many thousand files.
   const keyFor = (sha: string) => `${sha.slice(0, 2)}/${sha.slice(2, 4)}/${sha}`;
@@ -82,5 +82,5 @@ export function getStorage(): FileStorage {
 
 /** The folder getStorage() uses (the backup script copies it): lib/env's filesDir(), else .data/files. */
 export function storageDir(): string {
-  return path.resolve(filesDir() ?? path.join(process.cwd(), ".data", "files"));
+  return path.resolve(filesDir() ?? path.join(/*turbopackIgnore: true*/ process.cwd(), ".data", "files"));
 }
