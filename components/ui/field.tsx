@@ -52,6 +52,26 @@ function Messages({
   );
 }
 
+/** The frame every labelled control shares: label, the control (given the ids it needs), hint and error. */
+function Labelled({
+  label,
+  error,
+  hint,
+  className,
+  children,
+}: Omit<Common, "name"> & { children: (control: ReturnType<typeof useDescribed>["control"]) => React.ReactNode }) {
+  const d = useDescribed(error, hint);
+  return (
+    <div className={`grid gap-1 content-start ${className ?? ""}`}>
+      <label htmlFor={d.id} className="text-sm font-medium">
+        {label}
+      </label>
+      {children(d.control)}
+      <Messages error={error} errId={d.errId} hint={hint} hintId={d.hintId} />
+    </div>
+  );
+}
+
 export function Field({
   label,
   name,
@@ -60,15 +80,10 @@ export function Field({
   className,
   ...input
 }: Common & Omit<React.InputHTMLAttributes<HTMLInputElement>, "name">) {
-  const d = useDescribed(error, hint);
   return (
-    <div className={`grid gap-1 content-start ${className ?? ""}`}>
-      <label htmlFor={d.id} className="text-sm font-medium">
-        {label}
-      </label>
-      <input name={name} className={CONTROL} {...d.control} {...input} />
-      <Messages error={error} errId={d.errId} hint={hint} hintId={d.hintId} />
-    </div>
+    <Labelled label={label} error={error} hint={hint} className={className}>
+      {(control) => <input name={name} className={CONTROL} {...control} {...input} />}
+    </Labelled>
   );
 }
 
@@ -80,15 +95,10 @@ export function TextareaField({
   className,
   ...input
 }: Common & Omit<React.TextareaHTMLAttributes<HTMLTextAreaElement>, "name">) {
-  const d = useDescribed(error, hint);
   return (
-    <div className={`grid gap-1 content-start ${className ?? ""}`}>
-      <label htmlFor={d.id} className="text-sm font-medium">
-        {label}
-      </label>
-      <textarea name={name} className={CONTROL} {...d.control} {...input} />
-      <Messages error={error} errId={d.errId} hint={hint} hintId={d.hintId} />
-    </div>
+    <Labelled label={label} error={error} hint={hint} className={className}>
+      {(control) => <textarea name={name} className={CONTROL} {...control} {...input} />}
+    </Labelled>
   );
 }
 
@@ -101,17 +111,14 @@ export function SelectField({
   children,
   ...input
 }: Common & Omit<React.SelectHTMLAttributes<HTMLSelectElement>, "name">) {
-  const d = useDescribed(error, hint);
   return (
-    <div className={`grid gap-1 content-start ${className ?? ""}`}>
-      <label htmlFor={d.id} className="text-sm font-medium">
-        {label}
-      </label>
-      <select name={name} className={CONTROL} {...d.control} {...input}>
-        {children}
-      </select>
-      <Messages error={error} errId={d.errId} hint={hint} hintId={d.hintId} />
-    </div>
+    <Labelled label={label} error={error} hint={hint} className={className}>
+      {(control) => (
+        <select name={name} className={CONTROL} {...control} {...input}>
+          {children}
+        </select>
+      )}
+    </Labelled>
   );
 }
 

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import Papa from "papaparse";
 import { launchBrowser, signInAs, followTrailToSentence, APP_URL, E2E_DATABASE_URL } from "../helpers/browser";
+import { practiceIdByKey } from "../helpers/db";
 import { createDb, type DB } from "@/db";
 import { loadFixture } from "../integration/graph/fixture";
 import { handleResolve, type GraphJobDeps } from "@/workers/graph-jobs";
@@ -25,13 +26,7 @@ beforeAll(async () => {
   await refreshSummaries(db);
   // The e2e database may also hold other suites' articles (the demo corpus): keep to the fixture's venues.
   only = `venues=${ids.venues.methods},${ids.venues.applied}`;
-  alpha = (
-    await db
-      .selectFrom("practices")
-      .select("id")
-      .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
-      .executeTakeFirstOrThrow()
-  ).id;
+  alpha = await practiceIdByKey(db, "cronbach_alpha-ge-0.7-fixed");
   b = await launchBrowser();
   await signInAs(b.page, "reader");
 });

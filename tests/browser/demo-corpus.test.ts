@@ -4,6 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, signInAs, followTrailToSentence, APP_URL, E2E_DATABASE_URL } from "../helpers/browser";
+import { practiceIdByKey } from "../helpers/db";
 import { sessionCookie } from "../helpers/http";
 import { createDb, type DB } from "@/db";
 import { loadDemoCorpus } from "@/lib/demo/load";
@@ -48,13 +49,7 @@ beforeAll(async () => {
     },
     240_000,
   );
-  alpha = (
-    await db
-      .selectFrom("practices")
-      .select("id")
-      .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
-      .executeTakeFirstOrThrow()
-  ).id;
+  alpha = await practiceIdByKey(db, "cronbach_alpha-ge-0.7-fixed");
   const cookie = await sessionCookie("reader");
   // The graph jobs run after mining; wait until the dashboard the reader opens has their output.
   await until(

@@ -33,3 +33,8 @@ export async function createTestDatabase(): Promise<{ db: DB; url: string; name:
     },
   };
 }
+
+/** The id of a practice by its key (e.g. "cronbach_alpha-ge-0.7-fixed"); fails when it is missing. */
+export async function practiceIdByKey(db: DB, key: string): Promise<string> {
+  return (await db.selectFrom("practices").select("id").where("key", "=", key).executeTakeFirstOrThrow()).id;
+}

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { createTestDatabase } from "@/tests/helpers/db";
+import { createTestDatabase, practiceIdByKey } from "@/tests/helpers/db";
 import type { DB } from "@/db";
 import { loadFixture } from "./fixture";
 import { seedPractices } from "@/lib/graph/seed";
@@ -26,13 +26,7 @@ beforeAll(async () => {
   db = t.db;
   await seedPractices(db);
   ids = await loadFixture(db);
-  alpha = (
-    await db
-      .selectFrom("practices")
-      .select("id")
-      .where("key", "=", "cronbach_alpha-ge-0.7-fixed")
-      .executeTakeFirstOrThrow()
-  ).id;
+  alpha = await practiceIdByKey(db, "cronbach_alpha-ge-0.7-fixed");
   const deps: GraphJobDeps = {
     db,
     send: async (job, data) => void sent.push({ name: job.name, data: data as object }),
